@@ -1,0 +1,26 @@
+import { defineStore } from 'pinia'
+import type { Role } from '~~/shared/schemas/roles'
+import { isStaff } from '~~/shared/schemas/roles'
+
+// The signed-in person's bench: who they are, their workshop, and how they like numbers shown.
+export const useWorkbenchStore = defineStore('workbench', () => {
+  const { user, loggedIn, clear, fetch: refreshSession } = useUserSession()
+  const speedUnit = ref<'km/h' | 'mph'>('km/h')
+
+  const roles = computed<Role[]>(() => (user.value?.roles ?? []) as Role[])
+  const has = (...wanted: Role[]) => roles.value.some(r => wanted.includes(r))
+  const staff = computed(() => isStaff(roles.value))
+
+  async function signIn(email: string, password: string) {
+    await $fetch('/api/auth/login', { method: 'POST', body: { email, password } })
+    await refreshSession()
+  }
+
+  async function signOut() {
+    await $fetch('/api/auth/logout', { method: 'POST' })
+    await clear()
+    await navigateTo('/login')
+  }
+
+  return { user, loggedIn, roles, has, staff, speedUnit, signIn, signOut }
+})

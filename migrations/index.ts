@@ -1,0 +1,12 @@
+// Every migration, in order. Nitro bundles the server, so they are listed here rather than globbed.
+import * as foundation from './20261201-0001-foundation'
+import * as auditEvents from './20261201-0002-audit-events'
+import * as profilesAndReviews from './20261201-0003-profiles-and-reviews'
+import * as roadTestsAndSnags from './20261201-0004-road-tests-and-snags'
+
+export const migrations = [
+  { name: '20261201-0001-foundation', ...foundation },
+  { name: '20261201-0002-audit-events', ...auditEvents },
+  { name: '20261201-0003-profiles-and-reviews', ...profilesAndReviews },
+  { name: '20261201-0004-road-tests-and-snags', ...roadTestsAndSnags }
+]

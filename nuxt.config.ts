@@ -1,0 +1,40 @@
+// Voltwright: Nuxt 4 app, Nitro server routes, PostgreSQL through Sequelize.
+export default defineNuxtConfig({
+  compatibilityDate: '2026-11-01',
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', '@nuxt/eslint'],
+  devtools: { enabled: false },
+  telemetry: false,
+  css: [
+    '@fontsource/ibm-plex-sans/400.css',
+    '@fontsource/ibm-plex-sans/500.css',
+    '@fontsource/ibm-plex-sans/600.css',
+    '~/assets/css/main.css'
+  ],
+  app: {
+    head: {
+      htmlAttrs: { lang: 'en-GB' },
+      title: 'Voltwright',
+      meta: [
+        { name: 'viewport', content: 'width=device-width, initial-scale=1' },
+        { name: 'description', content: 'The register of motor-controller tuning profiles for converted classic cars.' }
+      ],
+      link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }]
+    }
+  },
+  runtimeConfig: {
+    databaseUrl: 'postgres://voltwright@127.0.0.1:54329/voltwright',
+    s3Endpoint: 'http://127.0.0.1:4569',
+    s3Bucket: 'voltwright',
+    smtpHost: '127.0.0.1',
+    smtpPort: 1025,
+    mailFrom: 'Voltwright <register@voltwright.test>',
+    public: { baseUrl: 'http://localhost:3000' }
+  },
+  nitro: {
+    // Sequelize loads its dialect by name at run time; keep these as real node modules.
+    externals: { external: ['sequelize', 'pg', 'pg-hstore'] }
+  },
+  typescript: { strict: true },
+  eslint: { config: { stylistic: false } },
+  tailwindcss: { cssPath: false, configPath: 'tailwind.config.ts' }
+})

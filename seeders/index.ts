@@ -1,0 +1,6 @@
+// Demo data, in order; run once each (the seed_runs table remembers), so running again changes nothing.
+import * as demoWorkshop from './20261201-0001-demo-workshop'
+
+export const seeders = [
+  { name: '20261201-0001-demo-workshop', ...demoWorkshop }
+]

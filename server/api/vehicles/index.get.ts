@@ -1,0 +1,7 @@
+import { vehicleListQuerySchema } from '../../../shared/schemas/vehicle'
+
+export default defineEventHandler(async (event) => {
+  const query = await getValidatedQuery(event, zodValidator(vehicleListQuerySchema))
+  const user = await requireUser(event)
+  return listVehicles(user, query)
+})

@@ -1,0 +1,30 @@
+import { Model, DataTypes, type Sequelize, type InferAttributes, type InferCreationAttributes, type CreationOptional } from 'sequelize'
+
+// What the car's controller was found to hold, compared with the signed-off version.
+export class Readback extends Model<InferAttributes<Readback>, InferCreationAttributes<Readback>> {
+  declare id: CreationOptional<number>
+  declare workshopId: number
+  declare vehicleId: number
+  declare profileId: number
+  declare versionId: number | null
+  declare parameters: Record<string, number>
+  declare matches: boolean
+  declare differences: CreationOptional<{ parameter: string, expected: number | null, found: number | null }[]>
+  declare recordedById: number
+  declare createdAt: CreationOptional<Date>
+
+  static initModel(sequelize: Sequelize) {
+    Readback.init({
+      id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+      workshopId: { type: DataTypes.INTEGER, allowNull: false },
+      vehicleId: { type: DataTypes.INTEGER, allowNull: false },
+      profileId: { type: DataTypes.INTEGER, allowNull: false },
+      versionId: { type: DataTypes.INTEGER, allowNull: true },
+      parameters: { type: DataTypes.JSONB, allowNull: false },
+      matches: { type: DataTypes.BOOLEAN, allowNull: false },
+      differences: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+      recordedById: { type: DataTypes.INTEGER, allowNull: false },
+      createdAt: DataTypes.DATE
+    }, { sequelize, tableName: 'readbacks', updatedAt: false })
+  }
+}

@@ -1,0 +1,48 @@
+import type { H3Event } from 'h3'
+import { z } from 'zod'
+import { User, Vehicle } from '../models'
+import { isStaff, type Role } from '../../shared/schemas/roles'
+
+export interface SignedIn { id: number, workshopId: number, email: string, name: string, roles: Role[] }
+
+// The session says who signed in; the database says whether they still may (deactivation takes effect at once).
+export async function requireUser(event: H3Event): Promise<SignedIn> {
+  if (event.context.signedIn) return event.context.signedIn as SignedIn
+  const session = await getUserSession(event)
+  const id = session.user?.id
+  if (!id) throw createError({ statusCode: 401, message: 'Please sign in.' })
+  const user = await User.findByPk(id)
+  if (!user || !user.active) {
+    await clearUserSession(event)
+    throw createError({ statusCode: 401, message: 'Please sign in.' })
+  }
+  const signedIn = { id: user.id, workshopId: user.workshopId, email: user.email, name: user.name, roles: user.roles }
+  event.context.signedIn = signedIn
+  return signedIn
+}
+
+export async function requireRole(event: H3Event, ...allowed: Role[]): Promise<SignedIn> {
+  const user = await requireUser(event)
+  if (!user.roles.some(r => allowed.includes(r))) {
+    throw createError({ statusCode: 403, message: `This needs the role of ${allowed.join(' or ')}.` })
+  }
+  return user
+}
+
+export async function requireStaff(event: H3Event): Promise<SignedIn> {
+  const user = await requireUser(event)
+  if (!isStaff(user.roles)) throw createError({ statusCode: 403, message: 'Only workshop staff can do this.' })
+  return user
+}
+
+export const idParamSchema = z.object({ id: z.coerce.number().int().positive().max(2147483647) })
+
+// A car of the signed-in person's workshop; a car owner reaches only their own. Anything else is 404.
+export async function requireVehicle(event: H3Event, id: number): Promise<{ user: SignedIn, vehicle: Vehicle }> {
+  const user = await requireUser(event)
+  const where: Record<string, unknown> = { id, workshopId: user.workshopId }
+  if (!isStaff(user.roles)) where.ownerUserId = user.id
+  const vehicle = await Vehicle.findOne({ where, include: ['platform'] })
+  if (!vehicle) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
+  return { user, vehicle }
+}

@@ -1,0 +1,62 @@
+import { z } from 'zod'
+import { vehicleSpecSchema } from './vehicle-spec'
+
+export const vehicleStatuses = ['intake', 'converting', 'road-testing', 'snagging', 'handed-over'] as const
+export type VehicleStatus = typeof vehicleStatuses[number]
+export const vehicleStatusLabels: Record<VehicleStatus, string> = {
+  'intake': 'Intake',
+  'converting': 'Converting',
+  'road-testing': 'Road testing',
+  'snagging': 'Snagging',
+  'handed-over': 'Handed over'
+}
+
+const text = (label: string, max = 80) => z.string({ error: `${label} is needed` }).trim().min(1, `${label} is needed`).max(max, `${label}: at most ${max} characters`)
+
+export const vehicleFieldsSchema = z.object({
+  stockRef: text('Stock ref', 20),
+  make: text('Make'),
+  model: text('Model'),
+  year: z.number({ error: 'A year is needed' }).int('A whole year').min(1885, 'Not before 1885').max(2100, 'Not after 2100'),
+  chassisNumber: z.string().trim().max(40).default(''),
+  registration: z.string().trim().max(20).default(''),
+  ownerUserId: z.number().int().positive().nullable().default(null),
+  status: z.enum(vehicleStatuses).default('intake'),
+  platformKey: text('Drive unit', 60),
+  spec: vehicleSpecSchema
+})
+
+export const vehicleCreateSchema = vehicleFieldsSchema.strict()
+export const vehicleUpdateSchema = vehicleFieldsSchema.partial().strict()
+
+export type VehicleCreate = z.output<typeof vehicleCreateSchema>
+export type VehicleUpdate = z.output<typeof vehicleUpdateSchema>
+
+export const vehicleSortFields = ['stockRef', 'make', 'model', 'year', 'status', 'updatedAt'] as const
+export const vehicleListQuerySchema = z.object({
+  q: z.string().trim().max(80).optional(),
+  status: z.enum(vehicleStatuses).optional(),
+  sort: z.enum(vehicleSortFields).default('stockRef'),
+  dir: z.enum(['asc', 'desc']).default('asc'),
+  page: z.coerce.number().int().min(1).max(10000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20)
+})
+export type VehicleListQuery = z.output<typeof vehicleListQuerySchema>
+
+// A car as the API answers it.
+export interface VehicleView {
+  id: number
+  stockRef: string
+  make: string
+  model: string
+  year: number
+  chassisNumber: string
+  registration: string
+  status: VehicleStatus
+  spec: z.output<typeof vehicleSpecSchema>
+  ownerUserId: number | null
+  owner: { id: number, name: string } | null
+  platform: { key: string, name: string } | null
+  createdAt: Date | string
+  updatedAt: Date | string
+}
