@@ -1,17 +1,10 @@
 import { Op } from 'sequelize'
-import { RoadTest, Snag, Vehicle } from '../models'
+import { RoadTest, Snag, type Vehicle } from '../models'
 import { vehicleStatusLabels, type VehicleStatus } from '../../shared/schemas/vehicle'
 import { describeProfile } from '../../shared/utils/plain-words'
+import type { ClientCarView } from '../../shared/schemas/client-view'
 import { onCarProfiles } from './drift'
 import { evaluateOnServer, loadWorkshopSettings } from './evaluation'
-
-export interface ClientCarView {
-  car: { id: number, stockRef: string, make: string, model: string, year: number, registration: string, status: string, statusLabel: string }
-  onCar: { profile: string, versionNo: number, words: string[] }[]
-  roadTest: { testedAt: string, verdict: 'pass' | 'fail', surface: string } | null
-  enhancements: { id: number, title: string, detail: string, status: string }[]
-  handoverPdf: string
-}
 
 // What a car's owner sees: the car, what its controller is set to in plain words, how the road test went and
 // what the workshop offers next. No people, notes, evaluations or internal snags.

@@ -3,18 +3,9 @@ import type { H3Event } from 'h3'
 import type { HistoryEntry, HistoryQuery } from '../../shared/schemas/history'
 import { auditActionLabel, changePathLabel, changeValueText } from '../../shared/utils/audit-actions'
 import { walkHistory, type HistoryScope } from './history'
+import { csvLine } from './csv'
 
 const COLUMNS = ['event', 'time (UTC)', 'car', 'action', 'what happened', 'entity', 'by', 'changes (before → after)', 'details', 'previous hash', 'hash']
-
-// RFC 4180 quoting; a cell a spreadsheet would run as a formula is prefixed with an apostrophe (OWASP CSV injection).
-export function csvCell(value: string): string {
-  const safe = /^[=+\-@\t\r]/.test(value) && !/^-?\d+(\.\d+)?$/.test(value) ? `'${value}` : value
-  return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe
-}
-
-export function csvLine(cells: string[]): string {
-  return `${cells.map(csvCell).join(',')}\r\n`
-}
 
 export function entryCells(e: HistoryEntry): string[] {
   const changes = e.changes.map(c => `${changePathLabel(c.path)}: ${c.beforeKnown ? changeValueText(c.before) : '(not recorded)'} → ${changeValueText(c.after)}`).join('; ')

@@ -21,7 +21,7 @@ export type ReadbackDocument = z.output<typeof readbackDocumentSchema>
 export const readbackSources = ['file', 'paste', 'typed'] as const
 export type ReadbackSource = typeof readbackSources[number]
 
-export const readbackBodySchema = z.union([
+export const readbackBodySchema = z.discriminatedUnion('source', [
   z.object({ source: z.enum(['file', 'paste']), document: readbackDocumentSchema }).strict(),
   z.object({
     source: z.literal('typed'),
@@ -29,7 +29,7 @@ export const readbackBodySchema = z.union([
     readAt: z.iso.datetime({ offset: true }).optional(),
     parameters: parameterValues
   }).strict()
-], { error: 'A read-back file (source file or paste, with document) or typed values (source typed, with profileId and parameters)' })
+], { error: 'The source: file, paste or typed' })
 export type ReadbackBody = z.output<typeof readbackBodySchema>
 
 export interface ReadbackDifference { parameter: string, expected: number | null, found: number | null }

@@ -73,7 +73,7 @@ function removeAt(root: unknown, keys: string[]): unknown {
   const parent = parentOf(root, keys, false)
   const last = keys[keys.length - 1]!
   if (Array.isArray(parent)) parent.splice(Number(last), 1)
-  else if (isObject(parent)) delete parent[last]
+  else if (isObject(parent)) Reflect.deleteProperty(parent, last)
   return root
 }
 
