@@ -1,17 +1,20 @@
 import { Op } from 'sequelize'
-import { RoadTest, Snag, type Vehicle } from '../models'
+import { RoadTest, Snag, Workshop, type Vehicle } from '../models'
 import { vehicleStatusLabels, type VehicleStatus } from '../../shared/schemas/vehicle'
 import { describeProfile } from '../../shared/utils/plain-words'
 import type { ClientCarView } from '../../shared/schemas/client-view'
 import { onCarProfiles } from './drift'
-import { evaluateOnServer, loadWorkshopSettings } from './evaluation'
+import { defaultSettings, evaluate, workshopSettingsSchema } from '../../shared/compute'
 
 // What a car's owner sees: the car, what its controller is set to in plain words, how the road test went and
 // what the workshop offers next. No people, notes, evaluations or internal snags.
 export async function clientCarView(vehicle: Vehicle): Promise<ClientCarView> {
-  const [profiles, settings] = await Promise.all([onCarProfiles(vehicle.id), loadWorkshopSettings(vehicle.workshopId)])
+  const [profiles, workshop] = await Promise.all([onCarProfiles(vehicle.id), Workshop.findByPk(vehicle.workshopId, { attributes: ['settings'] })])
+  // Parsed here rather than through utils/evaluation, which brings the server-only schema compiler along.
+  const parsed = workshopSettingsSchema.safeParse(workshop?.settings ?? {})
+  const settings = parsed.success ? parsed.data : defaultSettings
   const onCar = profiles.map((p) => {
-    const figures = vehicle.platform ? evaluateOnServer(vehicle.spec, vehicle.platform, p.parameters, settings).figures : {}
+    const figures = vehicle.platform ? evaluate(vehicle.spec, vehicle.platform, p.parameters, settings).figures : {}
     return { profile: p.name, versionNo: p.versionNo, words: describeProfile(p.parameters, figures) }
   })
   const test = profiles.length

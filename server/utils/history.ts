@@ -45,7 +45,7 @@ async function foldedStates(workshopId: number, rows: EventRow[]): Promise<Map<s
   const states = new Map<string, KnownState>()
   if (!needing.length) return states
   const pairs = [...new Map(needing.map(r => [entityKey(r), [r.entityType, r.entityId]])).values()]
-  const maxId = needing.reduce((m, r) => (BigInt(r.id) > m ? BigInt(r.id) : m), 0n)
+  const maxId = needing.reduce((m, r) => (BigInt(r.id) > m ? BigInt(r.id) : m), BigInt(0))
   const wanted = new Set(needing.map(r => r.id))
   const earlier = await useDatabase().query<Pick<EventRow, 'id' | 'entityType' | 'entityId' | 'data'>>(
     `SELECT id, "entityType", "entityId", data FROM audit_events

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase } from './helpers'
-import { addOnCarProfile, addPerson, addSnag, kestrelParameters, newCar } from './fixtures'
+import { addOnCarProfile, addPerson, addSnag, fenlowParameters, newCar } from './fixtures'
 
 describe('a car owner sees their own cars and nothing else', async () => {
   await useRunningServer()
@@ -12,7 +12,7 @@ describe('a car owner sees their own cars and nothing else', async () => {
 
   const mine = await newCar(tuner)
   await withDatabase(c => c.query('UPDATE vehicles SET "ownerUserId" = $1, status = $2 WHERE id = $3', [owner, 'handed-over', mine.id]))
-  const parameters = { ...kestrelParameters(), powerCapKw: 40, creepTorqueNm: 0, liftOffRegenPct: 10, speedLimitKph: 112 }
+  const parameters = { ...fenlowParameters(), powerCapKw: 40, creepTorqueNm: 0, liftOffRegenPct: 10, speedLimitKph: 112 }
   await addOnCarProfile(mine.id, { parameters, roadTest: 'pass' })
   await addSnag(mine.id, 'enhancement', 'Period-correct leather seat covers')
   await addSnag(mine.id, 'enhancement', 'Heated windscreen', 'declined')

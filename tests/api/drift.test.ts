@@ -28,7 +28,7 @@ describe('drift: read-backs against the signed-off profile', async () => {
   })
 
   it('treats values within half a step as the same setting (the controller stores on its step grid)', async () => {
-    // kestrel-45: powerCapKw steps by 0.5 kW, so 0.2 kW away is the same setting and 0.3 kW is not.
+    // fenlow-45: powerCapKw steps by 0.5 kW, so 0.2 kW away is the same setting and 0.3 kW is not.
     const near = await readback({ source: 'paste', document: documentFor(car.stockRef, { ...parameters, powerCapKw: parameters.powerCapKw! + 0.2 }) })
     expect(near.body.matches).toBe(true)
   })

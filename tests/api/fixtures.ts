@@ -13,18 +13,18 @@ export const testSpec = {
 }
 
 export async function newCar(as: Caller, extra: Record<string, unknown> = {}) {
-  const res = await as.call('POST', '/api/vehicles', { stockRef: unique('H').slice(0, 20), make: 'Testwick', model: 'Ledger Saloon', year: 1966, platformKey: 'kestrel-45', spec: testSpec, ...extra })
+  const res = await as.call('POST', '/api/vehicles', { stockRef: unique('H').slice(0, 20), make: 'Testwick', model: 'Ledger Saloon', year: 1966, platformKey: 'fenlow-45', spec: testSpec, ...extra })
   if (res.status !== 201) throw new Error(`creating a car answered ${res.status}: ${JSON.stringify(res.body)}`)
   return res.body as { id: number, stockRef: string, workshopId?: number }
 }
 
 export const userId = (email: string) => withDatabase(async c => (await c.query('SELECT id FROM users WHERE email = $1', [email])).rows[0].id as number)
 
-export const kestrelParameters = () => ({ ...defaultParameters(findPlatform('kestrel-45')!) }) as Record<string, number>
+export const fenlowParameters = () => ({ ...defaultParameters(findPlatform('fenlow-45')!) }) as Record<string, number>
 
 // A profile whose version 1 is signed off and on the car, optionally with a passing road test.
 export async function addOnCarProfile(vehicleId: number, options: { name?: string, parameters?: Record<string, number>, roadTest?: 'pass' | 'fail' } = {}) {
-  const parameters = options.parameters ?? kestrelParameters()
+  const parameters = options.parameters ?? fenlowParameters()
   const [author, tester] = await Promise.all([userId('tuner@voltwright.test'), userId('tester@voltwright.test')])
   return withDatabase(async (c) => {
     const { workshopId } = (await c.query('SELECT "workshopId" FROM vehicles WHERE id = $1', [vehicleId])).rows[0]
