@@ -40,3 +40,25 @@ export function changeValueText(value: unknown): string {
   if (typeof value === 'object') return JSON.stringify(value)
   return String(value)
 }
+
+const detailLabels: Record<string, string> = {
+  source: 'Came in as', matches: 'Matches the car\'s profile', profile: 'Profile', versionNo: 'Version', readAt: 'Read from the controller at',
+  controller: 'Controller', differences: 'Differences', reason: 'Reason', verdict: 'Verdict', roadTestId: 'Road test no.', versionId: 'Version id',
+  profileId: 'Profile id', passwordChanged: 'Password changed'
+}
+
+export function detailLabel(key: string): string {
+  return detailLabels[key] ?? key
+}
+
+// A detail as words: read-back differences as "parameter: signed off → found", yes/no for true/false.
+export function detailText(key: string, value: unknown): string {
+  if (key === 'differences' && Array.isArray(value)) {
+    return value.map((d: { parameter?: string, expected?: unknown, found?: unknown }) => `${d.parameter}: ${changeValueText(d.expected ?? null)} signed off → ${changeValueText(d.found ?? null)} found`).join('; ') || 'none'
+  }
+  if (typeof value === 'boolean') return value ? 'yes' : 'no'
+  if (value && typeof value === 'object' && !Array.isArray(value)) {
+    return Object.entries(value).map(([k, v]) => `${k} ${changeValueText(v)}`).join(', ') || '—'
+  }
+  return changeValueText(value)
+}
