@@ -43,16 +43,31 @@ async function workshop(): Promise<{ id: number, people: number[], cars: number[
 }
 
 const pick = <T>(xs: T[], i: number) => xs[i % xs.length]!
+// mulberry32: a small seeded generator, so every run writes the same mix.
+function random(seed: number) {
+  let a = seed >>> 0
+  return () => {
+    a = (a + 0x6D2B79F5) >>> 0
+    let t = Math.imul(a ^ (a >>> 15), 1 | a)
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
+  }
+}
+const draw = random(7301)
 const parameters = defaultParameters(findPlatform('fenlow-45')!)
 
 // A plausible mix: facts edited, versions drafted and reviewed, snags raised, read-backs recorded.
+const versionOf = new Map<number, string>()
 function eventFor(n: number, cars: number[], people: number[]) {
-  const vehicleId = pick(cars, n * 7919)
-  const actorId = pick(people, n)
-  const kind = n % 10
+  const vehicleId = pick(cars, Math.floor(draw() * cars.length))
+  const actorId = pick(people, Math.floor(draw() * people.length))
+  const kind = Math.floor(draw() * 10)
   if (kind < 3) return { vehicleId, actorId, action: 'vehicle.updated', entityType: 'vehicle', entityId: String(vehicleId), data: { patch: [{ op: 'replace', path: '/registration', value: `LH ${n}` }] } }
-  if (kind < 5) return { vehicleId, actorId, action: 'version.created', entityType: 'version', entityId: `${vehicleId}-${n}`, data: { after: { versionNo: 1 + (n % 40), parameters: { ...parameters, powerCapKw: 20 + (n % 25) } } } }
-  if (kind < 7) return { vehicleId: pick(cars, (n - 2) * 7919), actorId, action: 'version.submitted', entityType: 'version', entityId: `${vehicleId}-${n - 2}`, data: { patch: [{ op: 'replace', path: '/state', value: 'in-review' }], before: { state: 'draft' } } }
+  if (kind < 5 || !versionOf.has(vehicleId)) {
+    versionOf.set(vehicleId, `${vehicleId}-${n}`)
+    return { vehicleId, actorId, action: 'version.created', entityType: 'version', entityId: `${vehicleId}-${n}`, data: { after: { versionNo: 1 + (n % 40), state: 'draft', parameters: { ...parameters, powerCapKw: 20 + (n % 25) } } } }
+  }
+  if (kind < 7) return { vehicleId, actorId, action: 'version.updated', entityType: 'version', entityId: versionOf.get(vehicleId)!, data: { patch: [{ op: 'replace', path: '/parameters/powerCapKw', value: 20 + (n % 25) }] } }
   if (kind < 9) return { vehicleId, actorId, action: 'snag.created', entityType: 'snag', entityId: `${vehicleId}-${n}`, data: { after: { kind: 'remedial', title: `Bench snag ${n}`, priority: 'normal' } } }
   return { vehicleId, actorId, action: 'readback.matched', entityType: 'readback', entityId: `${vehicleId}-${n}`, data: { matches: true, differences: [], source: 'file', patch: [], before: { driftedAt: null } } }
 }

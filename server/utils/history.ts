@@ -39,7 +39,9 @@ function conditions(scope: HistoryScope, q: Omit<HistoryQuery, 'limit'>) {
 
 const entityKey = (r: { entityType: string, entityId: string }) => `${r.entityType}\u0000${r.entityId}`
 
-// Before-values for patches that carry none, folded from each entity's earlier events in one query.
+// Before-values for patches that carry none, folded from each entity's earlier events in one query. The
+// fold reads at most the FOLD_WINDOW latest of them: a value last set further back shows as not recorded.
+const FOLD_WINDOW = 1000
 async function foldedStates(workshopId: number, rows: EventRow[]): Promise<Map<string, KnownState>> {
   const needing = rows.filter(r => isPatch(r.data.patch) && r.data.before === undefined)
   const states = new Map<string, KnownState>()
@@ -48,11 +50,11 @@ async function foldedStates(workshopId: number, rows: EventRow[]): Promise<Map<s
   const maxId = needing.reduce((m, r) => (BigInt(r.id) > m ? BigInt(r.id) : m), BigInt(0))
   const wanted = new Set(needing.map(r => r.id))
   const earlier = await useDatabase().query<Pick<EventRow, 'id' | 'entityType' | 'entityId' | 'data'>>(
-    `SELECT id, "entityType", "entityId", data FROM audit_events
-     WHERE "workshopId" = :workshopId AND ("entityType", "entityId") IN (:pairs) AND id <= :maxId ORDER BY id`,
-    { replacements: { workshopId, pairs, maxId: String(maxId) }, type: QueryTypes.SELECT })
+    `SELECT id, "entityType", "entityId", jsonb_build_object('patch', data->'patch', 'after', data->'after') AS data FROM audit_events
+     WHERE "workshopId" = :workshopId AND ("entityType", "entityId") IN (:pairs) AND id <= :maxId ORDER BY id DESC LIMIT :window`,
+    { replacements: { workshopId, pairs, maxId: String(maxId), window: FOLD_WINDOW }, type: QueryTypes.SELECT })
   const running = new Map<string, KnownState>()
-  for (const e of earlier) {
+  for (const e of earlier.reverse()) {
     const key = entityKey(e)
     const state = running.get(key) ?? { known: false, state: undefined }
     if (wanted.has(String(e.id))) states.set(String(e.id), state)

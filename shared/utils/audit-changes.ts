@@ -4,6 +4,8 @@
 import type { ChangeRow } from '../schemas/history'
 
 export interface PatchOp { op: string, path: string, value?: unknown, from?: string }
+// What the earlier events said about an entity: every value they set, by path. `known` means the fold began
+// at a full snapshot (a creation's `after`), so a path it does not hold was absent rather than unrecorded.
 export interface KnownState { known: boolean, state: unknown }
 
 const isObject = (x: unknown): x is Record<string, unknown> => typeof x === 'object' && x !== null && !Array.isArray(x)
@@ -87,7 +89,7 @@ export function flattenLeaves(value: unknown, prefix = ''): { path: string, valu
 function beforeOf(path: string, op: string, tests: Map<string, unknown>, snapshot: unknown, fold?: KnownState): Pick<ChangeRow, 'before' | 'beforeKnown'> {
   if (tests.has(path)) return { before: tests.get(path), beforeKnown: true }
   if (op === 'add') return { before: undefined, beforeKnown: true }
-  for (const source of [isObject(snapshot) ? snapshot : undefined, fold?.known ? fold.state : undefined]) {
+  for (const source of [isObject(snapshot) ? snapshot : undefined, fold?.state]) {
     if (source === undefined) continue
     const got = pointerGet(source, path)
     if (got.found) return { before: got.value, beforeKnown: true }
@@ -119,7 +121,7 @@ export function changeRows(data: Record<string, unknown>, fold?: KnownState): Ch
 
 // The entity's state after this event, for the next one's "before".
 export function foldEvent(state: KnownState, data: Record<string, unknown>): KnownState {
-  if (isPatch(data.patch)) return state.known ? { known: true, state: applyPatchLenient(state.state, data.patch) } : state
+  if (isPatch(data.patch)) return { known: state.known, state: applyPatchLenient(state.state, data.patch) }
   if (isObject(data.after)) {
     if (!state.known || !isObject(state.state)) return { known: true, state: clone(data.after) }
     return { known: true, state: applyPatchLenient(state.state, flattenLeaves(data.after).map(r => ({ op: 'add', path: r.path, value: r.value }))) }

@@ -45,7 +45,14 @@ describe('what an audit event changed', () => {
       { path: '/spec/kerbMassKg', op: 'replace', before: 1050, after: 1075, beforeKnown: true },
       { path: '/spec/kerbMassKg', op: 'replace', before: 1075, after: 1090, beforeKnown: true }
     ])
-    expect(foldEvent({ known: false, state: undefined }, { patch: [] })).toEqual({ known: false, state: undefined })
+  })
+
+  it('knows a value\'s last writer even without a snapshot to start from', () => {
+    let state = foldEvent({ known: false, state: undefined }, { patch: [{ op: 'replace', path: '/registration', value: 'KP 1' }] })
+    expect(changeRows({ patch: [{ op: 'replace', path: '/registration', value: 'KP 2' }] }, state)[0]).toMatchObject({ before: 'KP 1', beforeKnown: true })
+    expect(changeRows({ patch: [{ op: 'replace', path: '/status', value: 'intake' }] }, state)[0]).toMatchObject({ beforeKnown: false })
+    state = foldEvent(state, { patch: [{ op: 'remove', path: '/registration' }] })
+    expect(changeRows({ patch: [{ op: 'replace', path: '/registration', value: 'KP 3' }] }, state)[0]).toMatchObject({ beforeKnown: false })
   })
 
   it('shows a creation as every field added, and a before/after pair as what differs', () => {

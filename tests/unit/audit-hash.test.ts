@@ -1,6 +1,8 @@
 import { createHash } from 'node:crypto'
 import { describe, it, expect } from 'vitest'
+import fc from 'fast-check'
 import { auditHash, auditHashBody, sha256Hex } from '../../server/utils/audit'
+import { canonicalJson } from '../../shared/utils/canonical-json'
 
 const event = {
   workshopId: 1, vehicleId: 7, actorId: 3, action: 'vehicle.updated', entityType: 'vehicle', entityId: '7',
@@ -28,5 +30,20 @@ describe('the audit chain\'s hash', () => {
     expect(auditHash(null, { ...event, createdAt: '2026-12-01T09:30:00.001Z' })).not.toBe(base)
     expect(auditHash(null, { ...event, data: { patch: [{ value: 'converting', path: '/status', op: 'replace' }] } })).toBe(base)
     expect(auditHash(null, { ...event, createdAt: new Date('2026-12-01T09:30:00Z') as unknown as string })).toBe(base)
+  })
+})
+
+// The plain definition the fast canonicalJson must agree with: sorted keys, no whitespace, undefined dropped.
+function reference(value: unknown): string {
+  if (value === null || typeof value !== 'object') return typeof value === 'number' && !Number.isFinite(value) ? 'null' : JSON.stringify(value ?? null)
+  if (Array.isArray(value)) return `[${value.map(reference).join(',')}]`
+  const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+  return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${reference(v)}`).join(',')}}`
+}
+
+describe('canonical JSON', () => {
+  it('agrees with its plain definition on any JSON value', () => {
+    fc.assert(fc.property(fc.jsonValue(), (v) => { expect(canonicalJson(v)).toBe(reference(v)) }), { numRuns: 500 })
+    expect(canonicalJson({ b: 1, a: [true, null, 'x"y'], c: undefined, é: -0, Z: 1e21 })).toBe('{"Z":1e+21,"a":[true,null,"x\\"y"],"b":1,"é":0}')
   })
 })
