@@ -45,4 +45,3 @@ export async function verifyChain(workshopId: number, batch = BATCH): Promise<Ve
     rows = await next
   }
 }
-}
