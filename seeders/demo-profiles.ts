@@ -83,7 +83,7 @@ export const demoProfiles: DemoProfile[] = [
     versions: [{
       author: tuner, daysAgo: 3, state: 'in-review',
       parameters: { powerCapKw: 45, torqueCapNm: 160, regenTorqueLimitNm: 110, liftOffRegenPct: 35 },
-      rationale: 'Full Kestrel power; firmer lift-off regen to recover energy on the owner\'s hilly commute.',
+      rationale: 'Full Fenlow power; firmer lift-off regen to recover energy on the owner\'s hilly commute.',
       justifications: { 'regen-grip-snow': 'The owner lays the car up from November to March; the handover sheet will say it must not be driven on snow. Lift-off is well inside the wet grip.' }
     }]
   }

@@ -3,7 +3,7 @@ import { createHash } from 'node:crypto'
 import { expect } from 'vitest'
 import { unique, type Caller } from './helpers'
 
-// A light rear-driven saloon on the Kestrel 45 (the vehicles test's car).
+// A light rear-driven saloon on the Fenlow 45 (the vehicles test's car).
 export const testSpec = {
   kerbMassKg: 1050, frontAxleLoadPct: 50, wheelbaseMm: 2400, cgHeightMm: 500, tyreSize: '165/80 R15 86S',
   finalDriveRatio: 7.5, drivetrainEfficiency: 0.9, dragCoefficient: 0.42, frontalAreaM2: 1.8, rollingResistanceCoeff: 0.01,
@@ -14,7 +14,7 @@ export const testSpec = {
 // Strong lift-off regen on a rear-driven car: beyond the rear axle's grip on snow (a danger warning).
 export const strongRegen = { regenTorqueLimitNm: 120, liftOffRegenPct: 70 }
 
-export async function newCar(tuner: Caller, platformKey = 'kestrel-45') {
+export async function newCar(tuner: Caller, platformKey = 'fenlow-45') {
   const res = await tuner.call('POST', '/api/vehicles', { stockRef: unique('V').slice(0, 20), make: 'Testwick', model: 'Review Saloon', year: 1964, platformKey, spec: testSpec })
   expect(res.status).toBe(201)
   return res.body as { id: number, stockRef: string }
@@ -26,7 +26,7 @@ export async function newProfile(tuner: Caller, vehicleId: number, body: Record<
   return res.body
 }
 
-export async function platformSchema(caller: Caller, key = 'kestrel-45') {
+export async function platformSchema(caller: Caller, key = 'fenlow-45') {
   const platforms = (await caller.call('GET', '/api/platforms')).body.items as { key: string, schema: { properties: Record<string, { default: number, minimum: number, maximum: number, unit: string, title: string }> } }[]
   return platforms.find(p => p.key === key)!.schema
 }
