@@ -1,5 +1,4 @@
 // Server-side JSON Schema tools for platform schemas (ajv compiles code, so not for the browser).
-// The .js suffix matters: the built server loads ajv as an external ES module import, and ajv has no exports map.
 import Ajv2020, { type ErrorObject, type ValidateFunction } from 'ajv/dist/2020.js'
 import { PARAMETER_NAMES } from '../compute/parameters'
 import type { PlatformLike } from '../compute/types'
