@@ -1,6 +1,8 @@
 // Demo data, in order; run once each (the seed_runs table remembers), so running again changes nothing.
 import * as demoWorkshop from './20261201-0001-demo-workshop'
+import * as demoRoadTests from './20261201-0003-demo-road-tests'
 
 export const seeders = [
-  { name: '20261201-0001-demo-workshop', ...demoWorkshop }
+  { name: '20261201-0001-demo-workshop', ...demoWorkshop },
+  { name: '20261201-0003-demo-road-tests', ...demoRoadTests }
 ]

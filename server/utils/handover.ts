@@ -2,13 +2,13 @@
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../models'
 import { HANDOVER_CAUTIONS, type HandoverProfile, type HandoverSheet } from '../../shared/schemas/handover'
-import { checkVerdictLabels, surfaceLabels, type CheckVerdict } from '../../shared/schemas/road-test'
+import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../shared/schemas/road-test'
+import { checkTitles } from '../../shared/schemas/road-test-checks'
 import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../shared/schemas/snag'
 import { vehicleStatusLabels, type VehicleStatus } from '../../shared/schemas/vehicle'
 import type { TelemetrySummary } from '../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './handover-words'
 
-const checkLabels: Record<string, string> = { 'hill-start': 'Hill start', 'lift-off-regen': 'Lift-off regen', 'brake-regen': 'Brake regen', 'creep': 'Creep', 'full-power': 'Full-power pull', 'thermal-soak': 'Thermal soak' }
 const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
 
 function measured(values: Record<string, unknown>): string {
@@ -46,7 +46,7 @@ async function profileSheet(vehicle: Vehicle, profile: Profile, version: Profile
     roadTest: rt ? {
       id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), tester, verdict: rt.verdict,
       conditions: `${surfaceLabels[rt.conditions.surface]} road, ${rt.conditions.ambientC} °C${rt.conditions.route ? `, ${rt.conditions.route}` : ''}`,
-      checks: rt.checks.map(c => ({ label: checkLabels[c.key] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict, measured: measured(c.values), note: c.note })),
+      checks: rt.checks.map(c => ({ label: checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict, measured: measured(c.values), note: c.note })),
       log: logLines(log?.summary as TelemetrySummary | undefined)
     } : null,
     people: [

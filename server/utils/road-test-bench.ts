@@ -23,3 +23,19 @@ export async function awaitingRoadTests(user: SignedIn): Promise<{ items: Awaiti
   })
   return { items, total: items.length }
 }
+
+export async function roadTestBrief(user: SignedIn, versionId: number) {
+  const { version, profile, vehicle } = await findTestedVersion(user, versionId)
+  const { figures, warnings } = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(user.workshopId))
+  return {
+    version: { id: version.id, versionNo: version.versionNo, state: version.state, authorId: version.authorId, parameters: version.parameters },
+    profile: { id: profile.id, name: profile.name },
+    vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null },
+    platformSchema: vehicle.platform?.schema ?? null,
+    expected: {
+      maxStartGradePct: figures.maxStartGradePct, creepHoldGradePct: figures.creepHoldGradePct, liftOffDecelMs2: figures.liftOffDecelMs2,
+      brakeRegenDecelMs2: figures.brakeRegenDecelMs2, topSpeedKph: figures.topSpeedKph, zeroTo50S: figures.zeroTo50S, regenGripLimitMs2: figures.regenGripLimitMs2
+    },
+    warnings: warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message }))
+  }
+}

@@ -8,6 +8,7 @@ import { unresolvedSnagStatuses } from '../../shared/schemas/snag'
 import { versionStateLabels, type VersionState } from '../../shared/schemas/version'
 import type { VehicleStatus } from '../../shared/schemas/vehicle'
 import { canonicalJson } from '../../shared/utils/canonical-json'
+import { roadTestRecordContent } from '../../shared/utils/road-test-record'
 
 export interface MissingForSignOff { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }
 
@@ -15,12 +16,12 @@ export interface MissingForSignOff { code: string, message: string, check?: stri
 export async function roadTestRecordHash(rt: RoadTest, version: ProfileVersion, signedAt: Date, transaction?: Transaction): Promise<string> {
   const logs = await TelemetryLog.findAll({ where: { roadTestId: rt.id }, order: [['id', 'ASC']], transaction })
   const files = await Attachment.findAll({ where: { workshopId: rt.workshopId, [Op.or]: [{ ownerType: 'road-test', ownerId: rt.id }, { id: logs.map(l => l.attachmentId) }] }, order: [['id', 'ASC']], transaction })
-  return sha256Hex(canonicalJson({
+  return sha256Hex(canonicalJson(roadTestRecordContent({
     roadTestId: rt.id, vehicleId: rt.vehicleId, versionId: version.id, versionContentHash: version.contentHash, testerId: rt.testerId,
-    testedAt: new Date(rt.testedAt).toISOString(), conditions: rt.conditions, checks: rt.checks, verdict: rt.verdict,
+    testedAt: rt.testedAt, conditions: rt.conditions, checks: rt.checks, verdict: rt.verdict,
     telemetry: logs.map(l => ({ summary: l.summary, sha256: files.find(f => f.id === l.attachmentId)?.sha256 ?? null })),
-    files: files.map(f => ({ id: f.id, sha256: f.sha256 })), signedAt: signedAt.toISOString()
-  }))
+    files: files.map(f => ({ id: f.id, sha256: f.sha256 })), signedAt
+  })))
 }
 
 async function whatIsMissing(user: SignedIn, rt: RoadTest, version: ProfileVersion, transaction: Transaction): Promise<MissingForSignOff[]> {
