@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url'
 // Voltwright: Nuxt 4 app, Nitro server routes, PostgreSQL through Sequelize.
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
-  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', '@nuxt/eslint'],
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', 'nuxt-security', '@nuxt/eslint'],
   devtools: { enabled: false },
   telemetry: false,
   css: [
@@ -40,6 +40,35 @@ export default defineNuxtConfig({
     externals: { external: ['sequelize', 'pg', 'pg-hstore', 'pdfkit', 'sharp'] },
     // IBM Plex Sans for the handover PDF, as WOFF (pdfkit cannot read WOFF2; PACKAGES.md).
     serverAssets: [{ baseName: 'fonts', dir: fileURLToPath(new URL('./node_modules/@fontsource/ibm-plex-sans/files', import.meta.url)), pattern: 'ibm-plex-sans-latin*-{400,600}-normal.woff' }]
+  },
+  security: {
+    headers: {
+      contentSecurityPolicy: {
+        'default-src': ["'self'"],
+        'script-src': ["'self'", "'nonce-{{nonce}}'", "'strict-dynamic'"],
+        'style-src': ["'self'", "'unsafe-inline'"],
+        'img-src': ["'self'", 'data:', 'blob:'],
+        'font-src': ["'self'", 'data:'],
+        'connect-src': ["'self'"],
+        'object-src': ["'none'"],
+        'base-uri': ["'none'"],
+        'form-action': ["'self'"],
+        'frame-ancestors': ["'none'"],
+        'upgrade-insecure-requests': false
+      },
+      // Sent by server/middleware/hsts.ts, only over HTTPS.
+      strictTransportSecurity: false,
+      crossOriginEmbedderPolicy: false,
+      xContentTypeOptions: 'nosniff',
+      xFrameOptions: 'DENY',
+      referrerPolicy: 'same-origin'
+    },
+    // Limits live in PostgreSQL (server/utils/rate-limit.ts) so that every instance shares them.
+    rateLimiter: false,
+    // Telemetry logs may be up to 50 MB; the upload route itself answers 413 above that.
+    requestSizeLimiter: { maxRequestSizeInBytes: 2_000_000, maxUploadFileRequestInBytes: 60_000_000 },
+    xssValidator: false,
+    corsHandler: false
   },
   typescript: { strict: true },
   eslint: { config: { stylistic: false } },
