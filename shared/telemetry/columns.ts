@@ -48,25 +48,32 @@ export function headerIndex(header: readonly string[]): Record<TelemetryColumn, 
 }
 
 function numberAt(cells: readonly string[], index: number, column: TelemetryColumn, row: number, line: number): number {
-  const raw = (cells[index] ?? '').trim()
-  if (raw === '') throw new TelemetryRowError(row, line, column, 'is empty')
-  const value = Number(raw)
-  if (!Number.isFinite(value)) throw new TelemetryRowError(row, line, column, `"${raw.slice(0, 20)}" is not a number`)
+  const raw = cells[index] ?? ''
+  const value = Number(raw) // Number() itself ignores surrounding spaces; an empty or blank cell reads 0
+  if (value === 0 && raw.trim() === '') throw new TelemetryRowError(row, line, column, 'is empty')
+  if (!Number.isFinite(value)) throw new TelemetryRowError(row, line, column, `"${raw.trim().slice(0, 20)}" is not a number`)
   if (column === 'brake') {
-    if (value !== 0 && value !== 1) throw new TelemetryRowError(row, line, column, `must be 0 or 1, not ${raw.slice(0, 20)}`)
+    if (value !== 0 && value !== 1) throw new TelemetryRowError(row, line, column, `must be 0 or 1, not ${raw.trim().slice(0, 20)}`)
     return value
   }
-  const [min, max] = bounds[column]
-  if (value < min || value > max) throw new TelemetryRowError(row, line, column, `${value} is outside ${min} to ${max}`)
+  const range = bounds[column]
+  if (value < range[0] || value > range[1]) throw new TelemetryRowError(row, line, column, `${value} is outside ${range[0]} to ${range[1]}`)
   return value
 }
 
 // Reads one record (row counts data rows from 1; line is the file's line, the header being line 1).
-export function readSample(cells: readonly string[], index: Record<TelemetryColumn, number>, row: number, line: number): TelemetrySample {
-  const n = (c: TelemetryColumn) => numberAt(cells, index[c], c, row, line)
+export function readSample(cells: readonly string[], at: Record<TelemetryColumn, number>, row: number, line: number): TelemetrySample {
   return {
-    timeS: n('time_s'), speedKph: n('speed_kph'), motorTorqueNm: n('motor_torque_nm'), motorRpm: n('motor_rpm'),
-    pedalPct: n('pedal_pct'), brake: n('brake') as 0 | 1, motorC: n('motor_c'), inverterC: n('inverter_c'),
-    batteryC: n('battery_c'), batteryV: n('battery_v'), batteryA: n('battery_a')
+    timeS: numberAt(cells, at.time_s, 'time_s', row, line),
+    speedKph: numberAt(cells, at.speed_kph, 'speed_kph', row, line),
+    motorTorqueNm: numberAt(cells, at.motor_torque_nm, 'motor_torque_nm', row, line),
+    motorRpm: numberAt(cells, at.motor_rpm, 'motor_rpm', row, line),
+    pedalPct: numberAt(cells, at.pedal_pct, 'pedal_pct', row, line),
+    brake: numberAt(cells, at.brake, 'brake', row, line) as 0 | 1,
+    motorC: numberAt(cells, at.motor_c, 'motor_c', row, line),
+    inverterC: numberAt(cells, at.inverter_c, 'inverter_c', row, line),
+    batteryC: numberAt(cells, at.battery_c, 'battery_c', row, line),
+    batteryV: numberAt(cells, at.battery_v, 'battery_v', row, line),
+    batteryA: numberAt(cells, at.battery_a, 'battery_a', row, line)
   }
 }
