@@ -7,7 +7,7 @@ import { demoRoadTests, demoSnags } from './demo-road-tests'
 
 // Road tests for the demo cars whose versions are signed off, and a snag list of each kind. Profiles come
 // from the demo-profiles seeder; whatever is absent is skipped, so this works with or without it.
-type Row = Record<string, any>
+type Row = Record<string, any> // eslint-disable-line @typescript-eslint/no-explicit-any -- raw SQL rows
 const select = (qi: QueryInterface, t: Transaction, sql: string, replacements: Record<string, unknown>) =>
   qi.sequelize.query<Row>(sql, { replacements, type: QueryTypes.SELECT, transaction: t })
 const DAY_MS = 86_400_000
