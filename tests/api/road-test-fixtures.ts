@@ -11,7 +11,7 @@ export const testSpec = {
   drivenAxle: 'rear', originalEnginePowerKw: 55, packNominalVoltageV: 350, packCapacityKwh: 30,
   packMaxChargeCurrentA: 100, packMaxDischargeCurrentA: 300, chargerPowerKw: 7
 }
-export const PLATFORM = 'harrier-110'
+export const PLATFORM = 'marrick-110'
 
 export async function newCar(tuner: Caller, extra: Record<string, unknown> = {}): Promise<{ id: number, stockRef: string }> {
   const res = await tuner.call('POST', '/api/vehicles', { stockRef: unique('RT').slice(0, 20), make: 'Testwick', model: 'Road Saloon', year: 1967, platformKey: PLATFORM, spec: testSpec, ...extra })
