@@ -3,10 +3,12 @@ import * as foundation from './20261201-0001-foundation'
 import * as auditEvents from './20261201-0002-audit-events'
 import * as profilesAndReviews from './20261201-0003-profiles-and-reviews'
 import * as roadTestsAndSnags from './20261201-0004-road-tests-and-snags'
+import * as roadTestFiles from './20261201-0006-road-test-files'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
   { name: '20261201-0002-audit-events', ...auditEvents },
   { name: '20261201-0003-profiles-and-reviews', ...profilesAndReviews },
-  { name: '20261201-0004-road-tests-and-snags', ...roadTestsAndSnags }
+  { name: '20261201-0004-road-tests-and-snags', ...roadTestsAndSnags },
+  { name: '20261201-0006-road-test-files', ...roadTestFiles }
 ]

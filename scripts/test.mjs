@@ -7,6 +7,7 @@ import { run, startChild, onShutdown, waitForHttp, shutdown } from './lib/proces
 import { startPostgres, stopServer } from './lib/postgres.mjs'
 import { ensureDependencies, ensureBuild, sessionPassword, startMailSink, startObjectStore, runDbScript } from './lib/setup.mjs'
 import { ensureChromium } from './lib/chromium.mjs'
+import { ensurePoppler } from './lib/poppler.mjs'
 
 // A folder under the system temp dir, so the `postgres` user can reach it wherever the clone lives.
 const scratch = process.env.DATA_DIR ? null : mkdtempSync(join(tmpdir(), 'voltwright-test-'))
@@ -48,7 +49,7 @@ try {
     VOLTWRIGHT_PG_DIR: pgDir,
     VOLTWRIGHT_PG_PORT: String(config.pgPort)
   }
-  step('API tests', () => run(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }), 'api')
+  step('API tests', () => { ensurePoppler(); return run(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }) }, 'api')
   step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); run(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
   console.log('\n[voltwright test] all passed')
   await shutdown(0)
