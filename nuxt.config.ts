@@ -1,7 +1,7 @@
 // Voltwright: Nuxt 4 app, Nitro server routes, PostgreSQL through Sequelize.
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
-  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', '@nuxt/eslint'],
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', 'nuxt-security', '@nuxt/eslint'],
   devtools: { enabled: false },
   telemetry: false,
   css: [
@@ -33,6 +33,35 @@ export default defineNuxtConfig({
   nitro: {
     // Sequelize loads its dialect by name at run time; keep these as real node modules.
     externals: { external: ['sequelize', 'pg', 'pg-hstore'] }
+  },
+  security: {
+    headers: {
+      contentSecurityPolicy: {
+        'default-src': ["'self'"],
+        'script-src': ["'self'", "'nonce-{{nonce}}'", "'strict-dynamic'"],
+        'style-src': ["'self'", "'unsafe-inline'"],
+        'img-src': ["'self'", 'data:', 'blob:'],
+        'font-src': ["'self'", 'data:'],
+        'connect-src': ["'self'"],
+        'object-src': ["'none'"],
+        'base-uri': ["'none'"],
+        'form-action': ["'self'"],
+        'frame-ancestors': ["'none'"],
+        'upgrade-insecure-requests': false
+      },
+      // Sent by server/middleware/hsts.ts, only over HTTPS.
+      strictTransportSecurity: false,
+      crossOriginEmbedderPolicy: false,
+      xContentTypeOptions: 'nosniff',
+      xFrameOptions: 'DENY',
+      referrerPolicy: 'same-origin'
+    },
+    // Limits live in PostgreSQL (server/utils/rate-limit.ts) so that every instance shares them.
+    rateLimiter: false,
+    // Telemetry logs may be up to 50 MB; the upload route itself answers 413 above that.
+    requestSizeLimiter: { maxRequestSizeInBytes: 2_000_000, maxUploadFileRequestInBytes: 60_000_000 },
+    xssValidator: false,
+    corsHandler: false
   },
   typescript: { strict: true },
   eslint: { config: { stylistic: false } },

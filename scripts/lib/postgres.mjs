@@ -1,7 +1,7 @@
 // Debian's PostgreSQL server in a data folder of the project's own, listening on 127.0.0.1 only.
 import { existsSync, mkdirSync, chownSync, readdirSync } from 'node:fs'
 import { join } from 'node:path'
-import { execFileSync } from 'node:child_process'
+import { execFile, execFileSync } from 'node:child_process'
 import { run } from './processes.mjs'
 
 const isRoot = process.getuid?.() === 0
@@ -68,4 +68,11 @@ export function startPostgres(dir, port) {
   const started = startServer(dir, port)
   ensureDatabase(port)
   return started
+}
+
+// The same stop without blocking the caller's event loop (tests stop the server while requests flow).
+export function stopServerAsync(dir) {
+  const bin = join(pgBinDir(), 'pg_ctl')
+  const [cmd, args] = isRoot ? ['runuser', ['-u', 'postgres', '--', bin, '-D', dir, '-m', 'fast', '-w', 'stop']] : [bin, ['-D', dir, '-m', 'fast', '-w', 'stop']]
+  return new Promise((resolve) => execFile(cmd, args, () => resolve()))
 }

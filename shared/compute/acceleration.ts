@@ -58,6 +58,7 @@ export interface AccelerationFigures {
 }
 
 const fmt = (x: number) => x.toFixed(0)
+const LIMIT_WORDS: Record<TopSpeedLimit, string> = { 'speed limit': 'the speed limit', 'motor rpm': "the motor's top rpm", 'road load': 'road load' }
 
 export function analyseAcceleration(car: CarModel): AccelerationFigures {
   const top = topSpeed(car)
@@ -69,7 +70,7 @@ export function analyseAcceleration(car: CarModel): AccelerationFigures {
   const timeFor = (kph: number, key: keyof AccelerationFigures['reasons']): number | null => {
     const i = targets.indexOf(kph)
     const t = i < 0 ? null : times[i] ?? null
-    if (i < 0) reasons[key] = `Top speed is about ${fmt(topKph)} km/h (limited by ${top.limitedBy}), so ${kph} km/h is never reached`
+    if (i < 0) reasons[key] = `Top speed is about ${fmt(topKph)} km/h (limited by ${LIMIT_WORDS[top.limitedBy]}), so ${kph} km/h is never reached`
     else if (t === null) reasons[key] = `Takes longer than ${DEFAULT_MAX_TIME_S} s to reach ${kph} km/h`
     return t
   }

@@ -6,13 +6,13 @@ import { computeFigures } from './figures'
 import { scrubFigures } from './finite'
 import { readParameters } from './parameter-input'
 import { runRules } from './rules/index'
-import { defaultSettings, workshopSettingsSchema, type WorkshopSettings } from './settings'
+import { defaultSettings, workshopSettingsSchema, type WorkshopSettings, type WorkshopSettingsInput } from './settings'
 import { readSpec } from './spec-input'
 import { readTyres } from './tyre-input'
 import { overallDiameterMm, rollingRadiusM } from './tyres'
 import type { Evaluation, EvaluationError, PlatformLike } from './types'
 
-export function evaluate(spec: VehicleSpec, platform: PlatformLike, parameters: Record<string, unknown>, settings?: WorkshopSettings): Evaluation {
+export function evaluate(spec: VehicleSpec, platform: PlatformLike, parameters: Record<string, unknown>, settings?: WorkshopSettingsInput): Evaluation {
   const s = readSettings(settings)
   const read = readSpec(spec)
   const tyres = readTyres(read.spec)

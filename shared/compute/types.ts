@@ -74,7 +74,7 @@ export interface SurfaceTriple { dry: number | null, wet: number | null, snow: n
 
 export interface Figures {
   testMassKg: number | null
-  tyreDiameterMm: number | null
+  tyreDiameterMm: number | null // of the driven axle's tyre, which sets the gearing
   rollingRadiusM: number | null
   maxWheelForceN: number | null
   zeroTo50S: number | null
@@ -92,7 +92,7 @@ export interface Figures {
   powerRatioToOriginal: number | null
   tyreLoadPerTyreKg: AxlePair
   tyreLoadCapacityKg: AxlePair
-  tyreSpeedRatingKph: number | null
+  tyreSpeedRatingKph: number | null // the lower of front and rear
 }
 
 export type FigureName = keyof Figures

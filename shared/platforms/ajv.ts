@@ -48,7 +48,9 @@ export function validatePlatformSchema(schema: unknown): SchemaCheck {
   if (schema === null || typeof schema !== 'object' || Array.isArray(schema)) return { ok: false, errors: ['The schema must be a JSON object'] }
   const s = schema as Record<string, unknown>
   if (s.$schema !== JSON_SCHEMA_2020_12) errors.push(`$schema must be "${JSON_SCHEMA_2020_12}"`)
-  if (!ajv().validateSchema(s)) errors.push(...describeAjvErrors(ajv().errors).map(e => `Not valid JSON Schema 2020-12: ${e}`))
+  // Against the 2020-12 meta-schema whatever $schema says, so a wrong draft still gets a clear answer.
+  const meta = ajv().getSchema(JSON_SCHEMA_2020_12)
+  if (meta && !meta(s)) errors.push(...describeAjvErrors(meta.errors).map(e => `Not valid JSON Schema 2020-12: ${e}`))
   if (s.type !== 'object') errors.push('type must be "object"')
   const props = (s.properties ?? {}) as Record<string, Record<string, unknown>>
   const required = Array.isArray(s.required) ? s.required : []
@@ -82,7 +84,7 @@ function parameterProblems(name: string, p: Record<string, unknown> | undefined,
 export function validatePlatform(platform: unknown): SchemaCheck {
   const p = (platform ?? {}) as Partial<PlatformLike>
   const errors: string[] = []
-  if (typeof p.key !== 'string' || !/^[a-z0-9]+(-[a-z0-9]+)*$/.test(p.key)) errors.push('key must be lower-case words joined by hyphens, e.g. "kestrel-45"')
+  if (typeof p.key !== 'string' || !/^[a-z0-9]+(-[a-z0-9]+)*$/.test(p.key)) errors.push('key must be lower-case words joined by hyphens, e.g. "fenlow-45"')
   if (typeof p.name !== 'string' || p.name.trim() === '') errors.push('name is needed')
   if (typeof p.motorMaxRpm !== 'number' || !Number.isFinite(p.motorMaxRpm) || p.motorMaxRpm <= 0) errors.push('motorMaxRpm must be a number of rpm above 0')
   errors.push(...validatePlatformSchema(p.schema).errors)

@@ -4,11 +4,11 @@ import type { ParameterName, Parameters } from '../compute/parameters'
 import { PARAMETER_NAMES } from '../compute/parameters'
 import { schemaProperties } from '../compute/parameter-input'
 import type { Platform, PlatformLike } from '../compute/types'
-import { condor220 } from './condor-220'
-import { harrier110 } from './harrier-110'
-import { kestrel45 } from './kestrel-45'
+import { ulvane220 } from './ulvane-220'
+import { marrick110 } from './marrick-110'
+import { fenlow45 } from './fenlow-45'
 
-export const platforms: readonly Platform[] = [kestrel45, harrier110, condor220]
+export const platforms: readonly Platform[] = [fenlow45, marrick110, ulvane220]
 
 export function findPlatform(key: string): Platform | undefined {
   return platforms.find(p => p.key === key)
@@ -25,5 +25,5 @@ export function defaultParameters(platform: PlatformLike): Parameters {
   return values
 }
 
-export { kestrel45, harrier110, condor220 }
+export { fenlow45, marrick110, ulvane220 }
 export { definePlatform, parameter, JSON_SCHEMA_2020_12, type ParameterLine } from './define'

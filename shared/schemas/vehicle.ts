@@ -13,21 +13,28 @@ export const vehicleStatusLabels: Record<VehicleStatus, string> = {
 
 const text = (label: string, max = 80) => z.string({ error: `${label} is needed` }).trim().min(1, `${label} is needed`).max(max, `${label}: at most ${max} characters`)
 
-export const vehicleFieldsSchema = z.object({
+const vehicleFields = {
   stockRef: text('Stock ref', 20),
   make: text('Make'),
   model: text('Model'),
   year: z.number({ error: 'A year is needed' }).int('A whole year').min(1885, 'Not before 1885').max(2100, 'Not after 2100'),
-  chassisNumber: z.string().trim().max(40).default(''),
-  registration: z.string().trim().max(20).default(''),
-  ownerUserId: z.number().int().positive().nullable().default(null),
-  status: z.enum(vehicleStatuses).default('intake'),
+  chassisNumber: z.string().trim().max(40),
+  registration: z.string().trim().max(20),
+  ownerUserId: z.number().int().positive().nullable(),
+  status: z.enum(vehicleStatuses),
   platformKey: text('Drive unit', 60),
   spec: vehicleSpecSchema
-})
+}
 
-export const vehicleCreateSchema = vehicleFieldsSchema.strict()
-export const vehicleUpdateSchema = vehicleFieldsSchema.partial().strict()
+// Booking in: the optional facts start empty. An edit changes only the fields it sends (no defaults).
+export const vehicleCreateSchema = z.object({
+  ...vehicleFields,
+  chassisNumber: vehicleFields.chassisNumber.default(''),
+  registration: vehicleFields.registration.default(''),
+  ownerUserId: vehicleFields.ownerUserId.default(null),
+  status: vehicleFields.status.default('intake')
+}).strict()
+export const vehicleUpdateSchema = z.object(vehicleFields).partial().strict()
 
 export type VehicleCreate = z.output<typeof vehicleCreateSchema>
 export type VehicleUpdate = z.output<typeof vehicleUpdateSchema>

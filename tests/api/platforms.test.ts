@@ -1,10 +1,10 @@
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, anonymous, withDatabase, unique } from './helpers'
-import { defaultParameters, kestrel45 } from '../../shared/platforms'
+import { defaultParameters, fenlow45 } from '../../shared/platforms'
 import { demoCars } from '../../seeders/demo-cars'
 
 const spec = demoCars[0]!.spec
-const goodUpload = (key: string) => ({ key, name: 'Osprey 60', motorMaxRpm: 11000, schema: structuredClone(kestrel45.schema) })
+const goodUpload = (key: string) => ({ key, name: 'Osprey 60', motorMaxRpm: 11000, schema: structuredClone(fenlow45.schema) })
 const stored = (key: string) => withDatabase(async c => (await c.query('SELECT count(*)::int AS n FROM platforms WHERE key = $1', [key])).rows[0].n as number)
 
 describe('drive units', async () => {
@@ -14,13 +14,13 @@ describe('drive units', async () => {
   const otherAdmin = await signIn('admin@second.voltwright.test')
 
   it('reads one drive unit by key, with its schema; unknown keys are 404; needs a session', async () => {
-    const res = await tuner.call('GET', '/api/platforms/harrier-110')
+    const res = await tuner.call('GET', '/api/platforms/marrick-110')
     expect(res.status).toBe(200)
-    expect(res.body).toMatchObject({ key: 'harrier-110', name: 'Harrier 110', motorMaxRpm: 12000, shared: true })
+    expect(res.body).toMatchObject({ key: 'marrick-110', name: 'Marrick 110', motorMaxRpm: 12000, shared: true })
     expect(res.body.schema.$schema).toBe('https://json-schema.org/draft/2020-12/schema')
     expect(Object.keys(res.body.schema.properties)).toHaveLength(18)
     expect((await tuner.call('GET', '/api/platforms/no-such-unit')).status).toBe(404)
-    expect((await anonymous.call('GET', '/api/platforms/harrier-110')).status).toBe(401)
+    expect((await anonymous.call('GET', '/api/platforms/marrick-110')).status).toBe(401)
   })
 
   it('stores a good schema for the admin\'s workshop, with its audit event, and evaluates with it', async () => {
@@ -34,7 +34,7 @@ describe('drive units', async () => {
     const events = await withDatabase(c => c.query('SELECT action, data FROM audit_events WHERE "entityType" = $1 AND "entityId" = $2', ['platform', String(res.body.id)]))
     expect(events.rows.map(r => r.action)).toEqual(['platform.created'])
     expect(events.rows[0].data.after.key).toBe(key)
-    const evaluated = await tuner.call('POST', '/api/evaluate', { spec, platformKey: key, parameters: defaultParameters(kestrel45) })
+    const evaluated = await tuner.call('POST', '/api/evaluate', { spec, platformKey: key, parameters: defaultParameters(fenlow45) })
     expect(evaluated.status).toBe(200)
     expect(evaluated.body.valid).toBe(true)
     // Another workshop sees neither the unit nor can evaluate with it.

@@ -66,6 +66,14 @@ describe('vehicles', async () => {
     expect(patch).toContainEqual({ op: 'replace', path: '/spec/kerbMassKg', value: 1075 })
   })
 
+  it('changes only the fields an edit sends', async () => {
+    const created = (await tuner.call('POST', '/api/vehicles', { ...newCar(platformKey), status: 'converting', chassisNumber: 'KEEP-1' })).body
+    const res = await tuner.call('PATCH', `/api/vehicles/${created.id}`, { registration: 'ONLY 1' })
+    expect(res.body.registration).toBe('ONLY 1')
+    expect(res.body.status).toBe('converting')
+    expect(res.body.chassisNumber).toBe('KEEP-1')
+  })
+
   it('shows each wrong spec value against its field and changes nothing', async () => {
     const created = (await tuner.call('POST', '/api/vehicles', newCar(platformKey))).body
     const res = await tuner.call('PATCH', `/api/vehicles/${created.id}`, { spec: { ...spec, kerbMassKg: -5, tyreSize: 'big ones' } })

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, anonymous, withDatabase } from './helpers'
-import { defaultParameters, kestrel45 } from '../../shared/platforms'
+import { defaultParameters, fenlow45 } from '../../shared/platforms'
 import { STANDARD_GRAVITY } from '../../shared/compute/units'
 import { demoCars } from '../../seeders/demo-cars'
 
@@ -38,7 +38,7 @@ describe('workshop settings', async () => {
         { op: 'replace', path: '/friction/wet', value: 0.42 },
         { op: 'replace', path: '/units/speed', value: 'mph' }
       ]))
-      const evaluated = await tuner.call('POST', '/api/evaluate', { spec, platformKey: 'kestrel-45', parameters: defaultParameters(kestrel45) })
+      const evaluated = await tuner.call('POST', '/api/evaluate', { spec, platformKey: 'fenlow-45', parameters: defaultParameters(fenlow45) })
       // Rear-axle-only braking limit a = μ·g·s_r/(1 + μ·h/L) (Gillespie ch. 2, REFERENCES.md) with the new μ
       expect(evaluated.body.figures.regenGripLimitMs2.wet).toBeCloseTo(0.42 * STANDARD_GRAVITY * 0.53 / (1 + 0.42 * 0.47 / 2.235), 6)
       expect((await otherAdmin.call('GET', '/api/workshop')).body.settings.friction.wet).toBe(0.5)

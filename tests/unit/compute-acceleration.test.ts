@@ -3,7 +3,7 @@ import { evaluate } from '../../shared/compute/evaluate'
 import { exampleSpec } from '../../shared/compute/example'
 import { timesToSpeeds } from '../../shared/compute/integrate'
 import { AIR_DENSITY_SEA_LEVEL as rho, STANDARD_GRAVITY as g, kphToMs, rpmToRadPerSec } from '../../shared/compute/units'
-import { defaultParameters, kestrel45 } from '../../shared/platforms/index'
+import { defaultParameters, fenlow45 } from '../../shared/platforms/index'
 
 const within = (actual: number | null, expected: number, tolerance = 0.005) => {
   expect(actual).not.toBeNull()
@@ -58,8 +58,8 @@ describe('0-50 km/h for a real car in the torque-limited range, against the drag
   it('matches t = m_i/√(c·F′)·atanh(v·√(c/F′)) with the whole model inside', () => {
     // All-wheel drive and torque low enough that neither power cap nor grip intervenes below 50 km/h.
     const spec = { ...exampleSpec, drivenAxle: 'all' as const }
-    const params = { ...defaultParameters(kestrel45), powerCapKw: 45, torqueCapNm: 120 }
-    const e = evaluate(spec, kestrel45, params)
+    const params = { ...defaultParameters(fenlow45), powerCapKw: 45, torqueCapNm: 120 }
+    const e = evaluate(spec, fenlow45, params)
     expect(e.valid).toBe(true)
     const r = (3.05 * (25.4 * 15 + 2 * 165 * 0.8)) / 1000 / (2 * Math.PI) // ETRTO rolling radius of 165/80 R15
     expect(params.powerCapKw * 1000 / ((kphToMs(50) * spec.finalDriveRatio) / r)).toBeGreaterThan(params.torqueCapNm)
@@ -73,23 +73,23 @@ describe('0-50 km/h for a real car in the torque-limited range, against the drag
 })
 
 describe('top speed and what limits it', () => {
-  const base = defaultParameters(kestrel45)
+  const base = defaultParameters(fenlow45)
 
   it('is the speed limit when drive and rpm allow more', () => {
-    const e = evaluate(exampleSpec, kestrel45, { ...base, speedLimitKph: 120 })
+    const e = evaluate(exampleSpec, fenlow45, { ...base, speedLimitKph: 120 })
     expect(e.figures.topSpeedLimitedBy).toBe('speed limit')
     expect(e.figures.topSpeedKph).toBeCloseTo(120, 9)
   })
 
   it('is the motor\'s max rpm with short gearing: v = ω_max·r/G', () => {
     const spec = { ...exampleSpec, finalDriveRatio: 9.5 }
-    const e = evaluate(spec, kestrel45, { ...base, speedLimitKph: 150 })
+    const e = evaluate(spec, fenlow45, { ...base, speedLimitKph: 150 })
     expect(e.figures.topSpeedLimitedBy).toBe('motor rpm')
-    expect(e.figures.topSpeedKph).toBeCloseTo((rpmToRadPerSec(kestrel45.motorMaxRpm) * e.figures.rollingRadiusM!) / 9.5 * 3.6, 6)
+    expect(e.figures.topSpeedKph).toBeCloseTo((rpmToRadPerSec(fenlow45.motorMaxRpm) * e.figures.rollingRadiusM!) / 9.5 * 3.6, 6)
   })
 
   it('is where power meets road load with a small power cap: P·η/v = Crr·m·g + c·v²', () => {
-    const e = evaluate(exampleSpec, kestrel45, { ...base, powerCapKw: 10, speedLimitKph: 150 })
+    const e = evaluate(exampleSpec, fenlow45, { ...base, powerCapKw: 10, speedLimitKph: 150 })
     expect(e.figures.topSpeedLimitedBy).toBe('road load')
     const v = kphToMs(e.figures.topSpeedKph!)
     const m = exampleSpec.kerbMassKg + exampleSpec.payloadKg
@@ -99,16 +99,16 @@ describe('top speed and what limits it', () => {
   })
 
   it('reaches 100 km/h when the speed limit is exactly 100 km/h', () => {
-    const e = evaluate(exampleSpec, kestrel45, { ...base, speedLimitKph: 100 })
+    const e = evaluate(exampleSpec, fenlow45, { ...base, speedLimitKph: 100 })
     expect(e.figures.zeroTo100S).not.toBeNull()
     expect(e.figures.zeroTo100S!).toBeGreaterThan(e.figures.zeroTo50S!)
   })
 
   it('gives null with a reason for a speed the car never reaches', () => {
-    const e = evaluate(exampleSpec, kestrel45, { ...base, speedLimitKph: 45 })
+    const e = evaluate(exampleSpec, fenlow45, { ...base, speedLimitKph: 45 })
     expect(e.figures.zeroTo50S).toBeNull()
     expect(e.figures.zeroTo100S).toBeNull()
-    expect(e.nullReasons.zeroTo50S).toMatch(/Top speed is about 45 km\/h \(limited by speed limit\)/)
+    expect(e.nullReasons.zeroTo50S).toMatch(/Top speed is about 45 km\/h \(limited by the speed limit\)/)
     expect(e.nullReasons.zeroTo100S).toMatch(/100 km\/h is never reached/)
   })
 })

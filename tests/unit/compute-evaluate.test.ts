@@ -3,7 +3,7 @@ import { evaluate } from '../../shared/compute/evaluate'
 import { exampleSpec } from '../../shared/compute/example'
 import { PARAMETER_NAMES } from '../../shared/compute/parameters'
 import type { VehicleSpec } from '../../shared/schemas/vehicle-spec'
-import { defaultParameters, harrier110, kestrel45 } from '../../shared/platforms/index'
+import { defaultParameters, marrick110, fenlow45 } from '../../shared/platforms/index'
 
 const FIGURE_NAMES = [ // DESIGN §4, in its order
   'testMassKg', 'tyreDiameterMm', 'rollingRadiusM', 'maxWheelForceN', 'zeroTo50S', 'zeroTo100S', 'topSpeedKph',
@@ -12,8 +12,8 @@ const FIGURE_NAMES = [ // DESIGN §4, in its order
   'tyreLoadPerTyreKg', 'tyreLoadCapacityKg', 'tyreSpeedRatingKph'
 ]
 
-const base = defaultParameters(harrier110)
-const run = (params: Record<string, unknown> = base, spec: VehicleSpec = exampleSpec) => evaluate(spec, harrier110, params)
+const base = defaultParameters(marrick110)
+const run = (params: Record<string, unknown> = base, spec: VehicleSpec = exampleSpec) => evaluate(spec, marrick110, params)
 const paths = (e: ReturnType<typeof run>) => e.errors.map(x => x.path)
 
 describe('the shape of an evaluation (DESIGN §4)', () => {
@@ -67,7 +67,7 @@ describe('hard errors', () => {
     const { powerCapKw: _, ...rest } = base
     const e = run(rest)
     expect(e.valid).toBe(false)
-    expect(e.errors).toEqual([{ path: 'parameters.powerCapKw', message: expect.stringMatching(/Power cap is missing; the Harrier 110 default is 80 kW/) }])
+    expect(e.errors).toEqual([{ path: 'parameters.powerCapKw', message: expect.stringMatching(/Power cap is missing; the Marrick 110 default is 80 kW/) }])
     expect(e.figures.powerRatioToOriginal).toBeCloseTo(80 / 55, 12)
   })
 
@@ -86,13 +86,13 @@ describe('hard errors', () => {
 
   it('below the minimum or above the maximum, with the figures worked out from the clamped value', () => {
     const high = run({ ...base, torqueCapNm: 900 })
-    expect(high.errors).toEqual([{ path: 'parameters.torqueCapNm', message: 'Torque cap must be at most 280 N·m on the Harrier 110' }])
+    expect(high.errors).toEqual([{ path: 'parameters.torqueCapNm', message: 'Torque cap must be at most 280 N·m on the Marrick 110' }])
     expect(high.figures.maxWheelForceN).toBeCloseTo(run({ ...base, torqueCapNm: 280 }).figures.maxWheelForceN!, 9)
     expect(run({ ...base, speedLimitKph: 5 }).errors[0]?.message).toMatch(/at least 20 km\/h/)
   })
 
   it('a value off the platform\'s step', () => {
-    expect(run({ ...base, powerCapKw: 80.3 }).errors).toEqual([{ path: 'parameters.powerCapKw', message: 'Power cap goes in steps of 0.5 kW on the Harrier 110' }])
+    expect(run({ ...base, powerCapKw: 80.3 }).errors).toEqual([{ path: 'parameters.powerCapKw', message: 'Power cap goes in steps of 0.5 kW on the Marrick 110' }])
     expect(run({ ...base, powerCapKw: 80.5 }).valid).toBe(true)
   })
 
@@ -109,7 +109,7 @@ describe('hard errors', () => {
   })
 
   it('a parameter the platform does not have', () => {
-    expect(run({ ...base, launchControl: 1 }).errors).toEqual([{ path: 'parameters.launchControl', message: '"launchControl" is not a setting of the Harrier 110' }])
+    expect(run({ ...base, launchControl: 1 }).errors).toEqual([{ path: 'parameters.launchControl', message: '"launchControl" is not a setting of the Marrick 110' }])
   })
 
   it('an unreadable tyre size: error on spec.tyreSize, tyre figures null with reasons, the rest still given', () => {
@@ -139,19 +139,19 @@ describe('hard errors', () => {
   })
 
   it('a spec out of range or missing a field: errors on spec paths, figures from clamped or example values', () => {
-    const e = evaluate({ ...exampleSpec, kerbMassKg: 9000, wheelbaseMm: undefined } as unknown as VehicleSpec, kestrel45, defaultParameters(kestrel45))
+    const e = evaluate({ ...exampleSpec, kerbMassKg: 9000, wheelbaseMm: undefined } as unknown as VehicleSpec, fenlow45, defaultParameters(fenlow45))
     expect(paths(e).sort()).toEqual(['spec.kerbMassKg', 'spec.wheelbaseMm'])
     expect(e.figures.testMassKg).toBe(4000 + 150)
   })
 
   it('workshop settings that cannot be read fall back to the defaults, and say so', () => {
-    const e = evaluate(exampleSpec, harrier110, base, { friction: { dry: 'high' } } as never)
+    const e = evaluate(exampleSpec, marrick110, base, { friction: { dry: 'high' } } as never)
     expect(paths(e)).toEqual(['settings.friction.dry'])
     expect(e.figures.regenGripLimitMs2).toEqual(run().figures.regenGripLimitMs2)
   })
 
   it('a platform without a usable motor speed limit', () => {
-    const e = evaluate(exampleSpec, { ...harrier110, motorMaxRpm: Number.NaN }, base)
+    const e = evaluate(exampleSpec, { ...marrick110, motorMaxRpm: Number.NaN }, base)
     expect(paths(e)).toEqual(['platform.motorMaxRpm'])
     expect(e.figures.topSpeedKph).not.toBeNull()
   })

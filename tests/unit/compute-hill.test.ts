@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest'
 import { evaluate } from '../../shared/compute/evaluate'
 import { exampleSpec } from '../../shared/compute/example'
-import { startGrade, torqueLimitedTangent, tractionLimitedTangent } from '../../shared/compute/hill'
+import { slopeAxleLoadsN, startGrade, torqueLimitedTangent, tractionLimitedTangent } from '../../shared/compute/hill'
 import type { Chassis } from '../../shared/compute/traction'
 import { STANDARD_GRAVITY as g } from '../../shared/compute/units'
-import { condor220, defaultParameters, kestrel45 } from '../../shared/platforms/index'
+import { ulvane220, defaultParameters, fenlow45 } from '../../shared/platforms/index'
 
 const chassis: Chassis = { massKg: 1130, rearShare: 0.47, cgHeightM: 0.52, wheelbaseM: 2.4 }
 const crr = 0.011
@@ -40,6 +40,13 @@ describe('hill start, traction-limited, with the slope moving load onto the rear
     expect(mu * uphillLoads(chassis, theta).front).toBeCloseTo(chassis.massKg * g * (Math.sin(theta) + crr * Math.cos(theta)), 6)
   })
 
+  it.each([0, 10, 25, 40])('slopeAxleLoadsN agrees with moments about the contact patches at %d %', (pct) => {
+    const mine = slopeAxleLoadsN(chassis, pct)
+    const byMoments = uphillLoads(chassis, Math.atan(pct / 100))
+    expect(mine.rear).toBeCloseTo(byMoments.rear, 6)
+    expect(mine.front).toBeCloseTo(byMoments.front, 6)
+  })
+
   it('all-wheel drive manages tanθ = μ − Crr, the most any car can; rear beats front on an uphill start', () => {
     const x = { chassis, rollingResistanceCoeff: crr, mu: 0.8 }
     const all = tractionLimitedTangent({ ...x, axle: 'all' })
@@ -59,18 +66,18 @@ describe('hill start, traction-limited, with the slope moving load onto the rear
 
 describe('hill-start figures from evaluate', () => {
   it('a small drive unit on the example car is torque-limited, a large one traction-limited', () => {
-    const small = evaluate(exampleSpec, kestrel45, defaultParameters(kestrel45))
-    const large = evaluate(exampleSpec, condor220, defaultParameters(condor220))
+    const small = evaluate(exampleSpec, fenlow45, defaultParameters(fenlow45))
+    const large = evaluate(exampleSpec, ulvane220, defaultParameters(ulvane220))
     expect(small.figures.startGradeLimitedBy).toBe('torque')
     expect(large.figures.startGradeLimitedBy).toBe('traction')
     expect(large.figures.maxStartGradePct!).toBeLessThanOrEqual(100 * 0.8)
   })
 
   it('creep with no torque holds nothing; more creep torque holds a steeper slope', () => {
-    const base = defaultParameters(kestrel45)
-    const off = evaluate(exampleSpec, kestrel45, { ...base, creepTorqueNm: 0 })
-    const low = evaluate(exampleSpec, kestrel45, { ...base, creepTorqueNm: 20 })
-    const high = evaluate(exampleSpec, kestrel45, { ...base, creepTorqueNm: 50 })
+    const base = defaultParameters(fenlow45)
+    const off = evaluate(exampleSpec, fenlow45, { ...base, creepTorqueNm: 0 })
+    const low = evaluate(exampleSpec, fenlow45, { ...base, creepTorqueNm: 20 })
+    const high = evaluate(exampleSpec, fenlow45, { ...base, creepTorqueNm: 50 })
     expect(off.figures.creepHoldGradePct).toBe(0)
     expect(high.figures.creepHoldGradePct!).toBeGreaterThan(low.figures.creepHoldGradePct!)
   })

@@ -42,7 +42,7 @@ const spec: fc.Arbitrary<VehicleSpec> = fc.record({
   packMaxChargeCurrentA: pos(2000),
   packMaxDischargeCurrentA: pos(3000),
   chargerPowerKw: pos(400)
-}, { requiredKeys: REQUIRED })
+}, { requiredKeys: [...REQUIRED] })
 
 // Every parameter anywhere within the platform schema's minimum and maximum.
 const parametersFor = (p: Platform) => fc.record(Object.fromEntries(PARAMETER_NAMES.map(n => [n, num(p.schema.properties[n]!.minimum, p.schema.properties[n]!.maximum)])))

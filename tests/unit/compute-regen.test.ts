@@ -6,7 +6,7 @@ import { exampleSpec } from '../../shared/compute/example'
 import { motorSpeedRadS } from '../../shared/compute/envelope'
 import { regenPackCurrentA, regenTorqueNm, type RegenDrive } from '../../shared/compute/regen'
 import { kphToMs } from '../../shared/compute/units'
-import { defaultParameters, harrier110 } from '../../shared/platforms/index'
+import { defaultParameters, marrick110 } from '../../shared/platforms/index'
 
 const drive: RegenDrive = { regenTorqueLimitNm: 200, batteryChargeLimitA: 100, packNominalVoltageV: 350, drivetrainEfficiency: 0.9 }
 
@@ -30,17 +30,17 @@ describe('regen torque (DESIGN §4, regen)', () => {
 })
 
 describe('regen deceleration at 50 km/h from evaluate', () => {
-  const base = defaultParameters(harrier110)
+  const base = defaultParameters(marrick110)
 
   it('lift-off decel is T·G/(r·m) with T = regenTorqueLimitNm·liftOffRegenPct/100', () => {
-    const e = evaluate(exampleSpec, harrier110, { ...base, liftOffRegenPct: 30 })
+    const e = evaluate(exampleSpec, marrick110, { ...base, liftOffRegenPct: 30 })
     const r = e.figures.rollingRadiusM!
     const torque = (base.regenTorqueLimitNm * 30) / 100
     expect(e.figures.liftOffDecelMs2).toBeCloseTo((torque * exampleSpec.finalDriveRatio) / r / e.figures.testMassKg!, 9)
   })
 
   it('a low charge limit caps the decel, and the pack current then equals the limit', () => {
-    const e = evaluate(exampleSpec, harrier110, { ...base, brakeRegenPct: 100, batteryChargeLimitA: 20 })
+    const e = evaluate(exampleSpec, marrick110, { ...base, brakeRegenPct: 100, batteryChargeLimitA: 20 })
     const r = e.figures.rollingRadiusM!
     const omega = motorSpeedRadS(kphToMs(50), exampleSpec.finalDriveRatio, r)
     const torque = (e.figures.brakeRegenDecelMs2! * e.figures.testMassKg! * r) / exampleSpec.finalDriveRatio

@@ -1,7 +1,7 @@
-// Condor 220: Voltwright's fictional large drive unit for big saloons, estates and light commercials.
+// Ulvane 220: Voltwright's fictional large drive unit for big saloons, estates and light commercials.
 import { definePlatform } from './define'
 
-export const condor220 = definePlatform('condor-220', 'Condor 220', 10500,
+export const ulvane220 = definePlatform('ulvane-220', 'Ulvane 220', 10500,
   'Large drive unit, 220 kW peak, for heavy cars of about 1400 to 2500 kg.', {
     powerCapKw: ['Power cap', 'kW', 20, 220, 1, 150, 'Most power the motor may deliver'],
     torqueCapNm: ['Torque cap', 'N·m', 50, 500, 5, 400, 'Most torque the motor may deliver, at any speed'],

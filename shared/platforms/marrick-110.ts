@@ -1,7 +1,7 @@
-// Harrier 110: Voltwright's fictional mid-size drive unit for saloons, coupés and light sports cars.
+// Marrick 110: Voltwright's fictional mid-size drive unit for saloons, coupés and light sports cars.
 import { definePlatform } from './define'
 
-export const harrier110 = definePlatform('harrier-110', 'Harrier 110', 12000,
+export const marrick110 = definePlatform('marrick-110', 'Marrick 110', 12000,
   'Mid-size drive unit, 110 kW peak, for cars of about 900 to 1500 kg.', {
     powerCapKw: ['Power cap', 'kW', 10, 110, 0.5, 80, 'Most power the motor may deliver'],
     torqueCapNm: ['Torque cap', 'N·m', 20, 280, 1, 220, 'Most torque the motor may deliver, at any speed'],

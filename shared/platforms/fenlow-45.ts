@@ -1,7 +1,7 @@
-// Kestrel 45: Voltwright's fictional compact drive unit for light cars (microcars, small saloons).
+// Fenlow 45: Voltwright's fictional compact drive unit for light cars (microcars, small saloons).
 import { definePlatform } from './define'
 
-export const kestrel45 = definePlatform('kestrel-45', 'Kestrel 45', 10000,
+export const fenlow45 = definePlatform('fenlow-45', 'Fenlow 45', 10000,
   'Compact drive unit, 45 kW peak, for light cars up to about 1000 kg.', {
     powerCapKw: ['Power cap', 'kW', 5, 45, 0.5, 40, 'Most power the motor may deliver'],
     torqueCapNm: ['Torque cap', 'N·m', 10, 160, 1, 140, 'Most torque the motor may deliver, at any speed'],
