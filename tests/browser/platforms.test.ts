@@ -3,7 +3,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { launch, signInThroughPage, shot, accessibilityProblems } from './helpers'
-import { harrier110 } from '../../shared/platforms'
+import { marrick110 } from '../../shared/platforms'
 
 const key = `heron-${Date.now().toString(36)}`
 
@@ -33,7 +33,7 @@ describe('an admin adds a drive unit', async () => {
 
   it('uploads a good schema from a file and sees it listed as the workshop\'s own', async () => {
     const file = join(mkdtempSync(join(tmpdir(), 'voltwright-schema-')), 'heron-90.json')
-    writeFileSync(file, JSON.stringify(harrier110.schema, null, 2))
+    writeFileSync(file, JSON.stringify(marrick110.schema, null, 2))
     await page.getByLabel('Schema file').setInputFiles(file)
     await expect.poll(() => page.getByLabel('Schema (JSON)').inputValue()).toContain('"powerCapKw"')
     await page.getByRole('button', { name: 'Check and store the drive unit' }).click()

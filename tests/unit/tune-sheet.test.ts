@@ -5,7 +5,7 @@ import { figureRows } from '../../app/utils/tune-figures'
 import { parameterGroups } from '../../app/utils/tune-groups'
 import { ruleTitles } from '../../app/utils/tune-rules'
 import { evaluate, PARAMETER_NAMES, RULE_IDS } from '../../shared/compute'
-import { defaultParameters, kestrel45 } from '../../shared/platforms'
+import { defaultParameters, fenlow45 } from '../../shared/platforms'
 import { exampleSpec } from '../../shared/compute/example'
 
 describe('tune sheet numbers', () => {
@@ -31,8 +31,8 @@ describe('tune sheet numbers', () => {
 })
 
 describe('tune sheet charts', () => {
-  const e = evaluate(exampleSpec, kestrel45, defaultParameters(kestrel45))
-  const other = evaluate(exampleSpec, kestrel45, { ...defaultParameters(kestrel45), powerCapKw: 20 })
+  const e = evaluate(exampleSpec, fenlow45, defaultParameters(fenlow45))
+  const other = evaluate(exampleSpec, fenlow45, { ...defaultParameters(fenlow45), powerCapKw: 20 })
 
   it('draws the four charts, each from the evaluation\'s curves', () => {
     const charts = tuneCharts(e.curves, undefined)
@@ -72,8 +72,8 @@ describe('tune sheet charts', () => {
 
 describe('tune sheet figures and groups', () => {
   it('gives each figure a row, with the reason where it cannot be had', () => {
-    const e = evaluate({ ...exampleSpec, tyreSize: '165/80 R15 86X' }, kestrel45, defaultParameters(kestrel45))
-    const rows = figureRows(e, exampleSpec, defaultParameters(kestrel45), { power: 'kW+hp', speed: 'km/h' })
+    const e = evaluate({ ...exampleSpec, tyreSize: '165/80 R15 86X' }, fenlow45, defaultParameters(fenlow45))
+    const rows = figureRows(e, exampleSpec, defaultParameters(fenlow45), { power: 'kW+hp', speed: 'km/h' })
     const top = rows.find(r => r.key === 'topSpeedKph')!
     expect(top.value).toBe('—')
     expect(top.reason).toMatch(/tyre/)
