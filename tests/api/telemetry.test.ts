@@ -88,8 +88,12 @@ describe('telemetry upload', async () => {
   it('413 for a file over 50 MB, by its declared length and by its streamed length', async () => {
     const big = Buffer.alloc(51 * 1024 * 1024, '0,0,0,0,0,0,20,20,20,350,0\n')
     await refusedLeavesNothing(() => upload(tester, path, multipart(Buffer.concat([Buffer.from(`${header}\n`), big]), 'big.csv', 'text/csv')), 413)
-    // Sent chunked, with no length up front: the limit is found while streaming.
-    const form = multipart(Buffer.concat([Buffer.from(`${header}\n`), big]), 'big.csv', 'text/csv')
+    // Sent chunked, with no length up front, and every row good: the limit is found while streaming.
+    const rows: string[] = [header]
+    for (let i = 0; rows.length < 1_900_000; i++) rows.push(`${i / 100},12,30,900,20,0,40,35,25,350,20`)
+    const good = Buffer.from(rows.join('\n'))
+    expect(good.length).toBeGreaterThan(50 * 1024 * 1024)
+    const form = multipart(good, 'big.csv', 'text/csv')
     const encoded = new Response(form)
     const stream = encoded.body!
     const res = await refusedLeavesNothing(async () => {
