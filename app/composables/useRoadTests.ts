@@ -14,7 +14,8 @@ export interface RoadTestBrief {
 export interface SignOffMissing { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }
 
 export function useRoadTestBrief(versionId: MaybeRefOrGetter<number>) {
-  return useFetch<RoadTestBrief>(() => `/api/versions/${toValue(versionId)}/road-test-brief`, { key: () => `road-test-brief-${toValue(versionId)}` })
+  // Waits for a version id (the road-test page learns it from the record it loads first).
+  return useFetch<RoadTestBrief>(() => `/api/versions/${toValue(versionId)}/road-test-brief`, { key: () => `road-test-brief-${toValue(versionId)}`, immediate: toValue(versionId) > 0 })
 }
 
 export function useVehicleRoadTests(vehicleId: MaybeRefOrGetter<number>) {

@@ -3,7 +3,7 @@ import { kphToMph, kwToHp, type Evaluation } from '../../shared/compute'
 import type { HandoverLine } from '../../shared/schemas/handover'
 import type { VehicleSpec } from '../../shared/schemas/vehicle-spec'
 
-const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: digits, minimumFractionDigits: digits })
+const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: digits })
 const kw = (x: number) => `${n(x, 1)} kW (${n(kwToHp(x))} hp)`
 const kph = (x: number | null) => x === null ? '—' : `${n(x)} km/h (${n(kphToMph(x))} mph)`
 

@@ -12,7 +12,8 @@ export function objectStore(): S3Client {
     endpoint: config.s3Endpoint,
     region: 'us-east-1',
     forcePathStyle: true,
-    credentials: { accessKeyId: config.s3AccessKeyId || 'voltwright', secretAccessKey: config.s3SecretAccessKey || 'voltwright' },
+    // s3rver knows one key pair, S3RVER/S3RVER; production sets real ones (NUXT_S3_ACCESS_KEY_ID, NUXT_S3_SECRET_ACCESS_KEY).
+    credentials: { accessKeyId: config.s3AccessKeyId || 'S3RVER', secretAccessKey: config.s3SecretAccessKey || 'S3RVER' },
     // Without these the SDK frames streamed bodies with checksums that s3rver stores verbatim (PACKAGES.md).
     requestChecksumCalculation: 'WHEN_REQUIRED',
     responseChecksumValidation: 'WHEN_REQUIRED'

@@ -85,3 +85,11 @@ export async function upload(caller: Caller, path: string, body: FormData | Buff
 }
 
 export const sha256 = (b: Buffer | string) => createHash('sha256').update(b).digest('hex')
+
+// A car owner of their own, so that the demo client's two cars stay two.
+export async function newClient(admin: Caller): Promise<{ id: number, email: string }> {
+  const email = `${unique('owner')}@voltwright.test`
+  const res = await admin.call('POST', '/api/users', { email, name: 'Ottoline Marsh', roles: ['client'], password: 'owner-password-123' })
+  if (res.status !== 201) throw new Error(`owner: ${res.status} ${JSON.stringify(res.body)}`)
+  return { id: res.body.id, email }
+}

@@ -2,8 +2,9 @@ import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase } from './helpers'
 import { approvedVersion, newCar, newProfile, passingChecks, recordRoadTest, roadTestBody } from './road-test-fixtures'
 
+await useRunningServer()
+
 describe('road tests', async () => {
-  await useRunningServer()
   const tuner = await signIn('tuner@voltwright.test')
   const tester = await signIn('tester@voltwright.test')
   const auditor = await signIn('auditor@voltwright.test')
@@ -73,7 +74,6 @@ describe('road tests', async () => {
 })
 
 describe('roadside changes', async () => {
-  await useRunningServer()
   const tuner = await signIn('tuner@voltwright.test')
   const tester = await signIn('tester@voltwright.test')
   const car = await newCar(tuner)

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase } from './helpers'
-import { approvedVersion, newCar, newProfile, passingChecks, recordRoadTest } from './road-test-fixtures'
+import { approvedVersion, newCar, newClient, newProfile, passingChecks, recordRoadTest } from './road-test-fixtures'
 
 const codes = (body: any) => body.data.missing.map((m: { code: string }) => m.code)
 
@@ -9,8 +9,9 @@ describe('sign-off', async () => {
   const tuner = await signIn('tuner@voltwright.test')
   const tester = await signIn('tester@voltwright.test')
   const lead = await signIn('lead@voltwright.test') // engineer, tuner and tester at once
-  const client = await signIn('client@voltwright.test')
-  const clientId = (await client.call('GET', '/api/auth/me')).body.id
+  const owner = await newClient(await signIn('admin@voltwright.test'))
+  const client = await signIn(owner.email, 'owner-password-123')
+  const clientId = owner.id
   const state = (id: number) => withDatabase(async c => (await c.query('SELECT state FROM profile_versions WHERE id = $1', [id])).rows[0].state)
   const onCar = (profileId: number) => withDatabase(async c => (await c.query('SELECT "onCarVersionId" FROM profiles WHERE id = $1', [profileId])).rows[0].onCarVersionId)
 
@@ -43,8 +44,8 @@ describe('sign-off', async () => {
     const to = mail.rows.map(r => r.to)
     expect(to).toContain('engineer@voltwright.test')
     expect(to).toContain('lead@voltwright.test')
-    const owner = await withDatabase(c => c.query('SELECT subject, text FROM mail_outbox WHERE "to" = $1 AND text LIKE $2', ['client@voltwright.test', `%/cars/${car.id}/handover%`]))
-    expect(owner.rows.length).toBe(2)
+    const ownerMail = await withDatabase(c => c.query('SELECT subject, text FROM mail_outbox WHERE "to" = $1 AND text LIKE $2', [owner.email, `%/cars/${car.id}/handover%`]))
+    expect(ownerMail.rows.length).toBe(2)
   })
 
   it('moves the car to snagging when snags remain open, none blocking', async () => {

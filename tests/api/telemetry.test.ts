@@ -5,7 +5,7 @@ import { approvedVersion, multipart, newCar, newProfile, recordRoadTest, sha256,
 import { syntheticDrive, telemetryCsv } from '../../shared/telemetry/synthetic'
 import { summarise } from '../../shared/telemetry/summary'
 
-const s3 = new S3Client({ endpoint: process.env.NUXT_S3_ENDPOINT, region: 'us-east-1', forcePathStyle: true, credentials: { accessKeyId: 'test', secretAccessKey: 'test' }, requestChecksumCalculation: 'WHEN_REQUIRED', responseChecksumValidation: 'WHEN_REQUIRED' })
+const s3 = new S3Client({ endpoint: process.env.NUXT_S3_ENDPOINT, region: 'us-east-1', forcePathStyle: true, credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' }, requestChecksumCalculation: 'WHEN_REQUIRED', responseChecksumValidation: 'WHEN_REQUIRED' })
 async function storedKeys(): Promise<string[]> {
   const keys: string[] = []
   let token: string | undefined
@@ -88,8 +88,12 @@ describe('telemetry upload', async () => {
   it('413 for a file over 50 MB, by its declared length and by its streamed length', async () => {
     const big = Buffer.alloc(51 * 1024 * 1024, '0,0,0,0,0,0,20,20,20,350,0\n')
     await refusedLeavesNothing(() => upload(tester, path, multipart(Buffer.concat([Buffer.from(`${header}\n`), big]), 'big.csv', 'text/csv')), 413)
-    // Sent chunked, with no length up front: the limit is found while streaming.
-    const form = multipart(Buffer.concat([Buffer.from(`${header}\n`), big]), 'big.csv', 'text/csv')
+    // Sent chunked, with no length up front, and every row good: the limit is found while streaming.
+    const rows: string[] = [header]
+    for (let i = 0; rows.length < 1_900_000; i++) rows.push(`${i / 100},12,30,900,20,0,40,35,25,350,20`)
+    const good = Buffer.from(rows.join('\n'))
+    expect(good.length).toBeGreaterThan(50 * 1024 * 1024)
+    const form = multipart(good, 'big.csv', 'text/csv')
     const encoded = new Response(form)
     const stream = encoded.body!
     const res = await refusedLeavesNothing(async () => {
@@ -108,10 +112,10 @@ describe('telemetry upload', async () => {
 
   it('422 naming the row and the column of a bad row, half-way through a long file', async () => {
     const lines = telemetryCsv(syntheticDrive(car0)).trimEnd().split('\n')
-    lines[3001] = lines[3001]!.replace(/^([^,]*,[^,]*,[^,]*,[^,]*),[^,]*/, '$1,lots')
+    lines[2001] = lines[2001]!.replace(/^([^,]*,[^,]*,[^,]*,[^,]*),[^,]*/, '$1,lots')
     const res = await refusedLeavesNothing(() => upload(tester, path, multipart(lines.join('\n'), 'bad.csv', 'text/csv')), 422)
-    expect(res.body.data).toEqual({ row: 3001, line: 3002, column: 'pedal_pct' })
-    expect(res.body.message).toContain('Row 3001 (line 3002), column pedal_pct')
+    expect(res.body.data).toEqual({ row: 2001, line: 2002, column: 'pedal_pct' })
+    expect(res.body.message).toContain('Row 2001 (line 2002), column pedal_pct')
     const noColumn = await refusedLeavesNothing(() => upload(tester, path, multipart(`${header.replace(',brake', '')}\n0,0,0,0,0,20,20,20,350,0\n`, 'old.csv', 'text/csv')), 422)
     expect(noColumn.body.data).toEqual({ row: 0, line: 1, column: 'brake' })
   })
