@@ -41,12 +41,12 @@ function percentile(xs: number[], p: number) {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!
 }
 
-async function load(connections: number, amount: number) {
+async function load(connections: number, amount: number, pool = paths) {
   const times: number[] = []
   let i = 0
   const instance = autocannon({
     url: base, connections, amount, headers: { cookie },
-    requests: [{ setupRequest: (req: Record<string, unknown>) => ({ ...req, method: 'GET', path: paths[i++ % paths.length] }) }]
+    requests: [{ setupRequest: (req: Record<string, unknown>) => ({ ...req, method: 'GET', path: pool[i++ % pool.length] }) }]
   })
   instance.on('response', (_c: unknown, status: number, _b: unknown, ms: number) => { if (status === 200) times.push(ms) })
   const result = await instance
@@ -54,6 +54,9 @@ async function load(connections: number, amount: number) {
 }
 
 await load(2, 200) // warm-up
+// For scale: the plainest signed-in read there is, on the same machine at the same moment.
+const plain = await load(1, 1000, cars.map(c => `/api/vehicles/${c.id}`))
+console.log(`for scale, GET /api/vehicles/:id, 1 connection: p50 ${percentile(plain.times, 50).toFixed(1)} ms, p95 ${percentile(plain.times, 95).toFixed(1)} ms`)
 for (const connections of [1, 8]) {
   const { times, errors, rps } = await load(connections, 2000)
   const p95 = percentile(times, 95)

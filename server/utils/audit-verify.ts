@@ -27,16 +27,16 @@ export async function verifyChain(workshopId: number, batch = BATCH): Promise<Ve
     // The next batch is read while this one is hashed.
     const next = rows.length === batch ? fetch(String(rows[rows.length - 1]!.id)) : null
     for (const row of rows) {
-      const at = { id: String(row.id), createdAt: new Date(row.createdAt).toISOString() }
+      const at = () => ({ id: String(row.id), createdAt: new Date(row.createdAt).toISOString() })
       if (row.prevHash !== prevHash) {
         next?.catch(() => undefined)
-        return result(checked, { ...at, problem: 'link', message: prevHash === null
+        return result(checked, { ...at(), problem: 'link', message: prevHash === null
           ? 'The first event of the chain names a previous event that is not there.'
           : `Its previous hash does not match the event before it (expected ${prevHash.slice(0, 12)}…, found ${String(row.prevHash).slice(0, 12)}…): an event before it was removed, inserted or changed.` })
       }
       if (auditHash(row.prevHash, row) !== row.hash) {
         next?.catch(() => undefined)
-        return result(checked, { ...at, problem: 'content', message: 'Its content no longer matches its hash: the event was changed after it was written.' })
+        return result(checked, { ...at(), problem: 'content', message: 'Its content no longer matches its hash: the event was changed after it was written.' })
       }
       prevHash = row.hash
       checked++

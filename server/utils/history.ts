@@ -39,32 +39,46 @@ function conditions(scope: HistoryScope, q: Omit<HistoryQuery, 'limit'>) {
 
 const entityKey = (r: { entityType: string, entityId: string }) => `${r.entityType}\u0000${r.entityId}`
 
-// Before-values for patches that carry none, folded from each entity's earlier events in one query. The
-// fold reads at most the FOLD_WINDOW latest of them: a value last set further back shows as not recorded.
-const FOLD_WINDOW = 1000
-async function foldedStates(workshopId: number, rows: EventRow[]): Promise<Map<string, KnownState>> {
-  const needing = rows.filter(r => isPatch(r.data.patch) && r.data.before === undefined)
+// Before-values for patches that carry none, folded from each entity's earlier events: at most PER_ENTITY
+// of them, read newest first in one query; a value last set further back shows as not recorded. When the page
+// holds every event of its range (no filters), only the events before the page are read.
+const PER_ENTITY = 100
+type FoldRow = Pick<EventRow, 'id' | 'entityType' | 'entityId' | 'data'>
+const needsFold = (r: EventRow) => isPatch(r.data.patch) && r.data.patch.some(o => o.op !== 'test') && r.data.before === undefined
+
+async function foldedStates(workshopId: number, rows: EventRow[], complete: boolean): Promise<Map<string, KnownState>> {
+  const needing = rows.filter(needsFold)
   const states = new Map<string, KnownState>()
   if (!needing.length) return states
-  const pairs = [...new Map(needing.map(r => [entityKey(r), [r.entityType, r.entityId]])).values()]
-  const maxId = needing.reduce((m, r) => (BigInt(r.id) > m ? BigInt(r.id) : m), BigInt(0))
-  const wanted = new Set(needing.map(r => r.id))
-  const earlier = await useDatabase().query<Pick<EventRow, 'id' | 'entityType' | 'entityId' | 'data'>>(
-    `SELECT id, "entityType", "entityId", jsonb_build_object('patch', data->'patch', 'after', data->'after') AS data FROM audit_events
-     WHERE "workshopId" = :workshopId AND ("entityType", "entityId") IN (:pairs) AND id <= :maxId ORDER BY id DESC LIMIT :window`,
-    { replacements: { workshopId, pairs, maxId: String(maxId), window: FOLD_WINDOW }, type: QueryTypes.SELECT })
-  const running = new Map<string, KnownState>()
-  for (const e of earlier.reverse()) {
-    const key = entityKey(e)
-    const state = running.get(key) ?? { known: false, state: undefined }
-    if (wanted.has(String(e.id))) states.set(String(e.id), state)
-    running.set(key, foldEvent(state, e.data))
+  const keys = new Set(needing.map(entityKey))
+  const onPage = new Map<string, EventRow[]>() // oldest first, per entity
+  for (const r of [...rows].reverse()) {
+    const key = entityKey(r)
+    if (keys.has(key)) onPage.set(key, [...(onPage.get(key) ?? []), r])
+  }
+  const tuples = [...onPage.values()].map((list) => {
+    const bound = complete ? BigInt(list[0]!.id) : BigInt(list.filter(needsFold).at(-1)!.id) + BigInt(1)
+    return [list[0]!.entityType, list[0]!.entityId, String(bound)]
+  })
+  const earlier = await useDatabase().query<FoldRow>(
+    `SELECT x.id, x."entityType", x."entityId", x.data FROM (VALUES :tuples) AS q(et, ei, bound) CROSS JOIN LATERAL (
+       SELECT id, "entityType", "entityId", jsonb_build_object('patch', data->'patch', 'after', data->'after') AS data FROM audit_events
+       WHERE "workshopId" = :workshopId AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT :perEntity) x`,
+    { replacements: { workshopId, tuples, perEntity: PER_ENTITY }, type: QueryTypes.SELECT })
+  const wanted = new Set(needing.map(r => String(r.id)))
+  for (const [key, page] of onPage) {
+    const prior = earlier.filter(e => entityKey(e) === key).sort((a, b) => Number(BigInt(a.id) - BigInt(b.id)))
+    let state: KnownState = { known: false, state: undefined }
+    for (const e of complete ? [...prior, ...page] : prior) {
+      if (wanted.has(String(e.id))) states.set(String(e.id), state)
+      state = foldEvent(state, e.data)
+    }
   }
   return states
 }
 
-async function toEntries(workshopId: number, rows: EventRow[]): Promise<HistoryEntry[]> {
-  const folds = await foldedStates(workshopId, rows)
+async function toEntries(workshopId: number, rows: EventRow[], complete: boolean): Promise<HistoryEntry[]> {
+  const folds = await foldedStates(workshopId, rows, complete)
   return rows.map(r => ({
     id: String(r.id), createdAt: new Date(r.createdAt).toISOString(), action: r.action, entityType: r.entityType, entityId: r.entityId,
     vehicle: r.vehicleId ? { id: r.vehicleId, stockRef: r.stockRef ?? '' } : null,
@@ -79,7 +93,7 @@ export async function readHistory(scope: HistoryScope, q: HistoryQuery): Promise
   const rows = await useDatabase().query<EventRow>(`${SELECT} WHERE ${where} ORDER BY e.id DESC LIMIT :limit`,
     { replacements: { ...replacements, limit: q.limit + 1 }, type: QueryTypes.SELECT })
   const page = rows.slice(0, q.limit)
-  const items = await toEntries(scope.workshopId, page)
+  const items = await toEntries(scope.workshopId, page, !q.action && !q.actorId && !q.from && !q.to)
   return { items, nextCursor: rows.length > q.limit ? items[items.length - 1]!.id : null }
 }
 

@@ -47,3 +47,17 @@ describe('canonical JSON', () => {
     expect(canonicalJson({ b: 1, a: [true, null, 'x"y'], c: undefined, é: -0, Z: 1e21 })).toBe('{"Z":1e+21,"a":[true,null,"x\\"y"],"b":1,"é":0}')
   })
 })
+
+describe('the hashed body', () => {
+  it('is exactly the canonical JSON of the event without id and hash', () => {
+    const events = fc.record({
+      workshopId: fc.integer({ min: 1 }), vehicleId: fc.option(fc.integer({ min: 1 }), { nil: null }), actorId: fc.option(fc.integer({ min: 1 }), { nil: null }),
+      action: fc.string(), entityType: fc.string(), entityId: fc.string(), data: fc.dictionary(fc.string(), fc.jsonValue()),
+      createdAt: fc.date({ min: new Date('2000-01-01'), max: new Date('2100-01-01'), noInvalidDate: true }).map(d => d.toISOString()), prevHash: fc.constant(null)
+    })
+    fc.assert(fc.property(events, (e) => {
+      const { prevHash: _p, ...covered } = e
+      expect(auditHashBody(e)).toBe(reference({ ...covered, createdAt: new Date(e.createdAt).toISOString() }))
+    }), { numRuns: 300 })
+  })
+})
