@@ -3,7 +3,7 @@ import { mkdtempSync, rmSync, chmodSync, mkdirSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { root, stackConfig, serverEnv } from './lib/config.mjs'
-import { run, startChild, onShutdown, waitForHttp, shutdown } from './lib/processes.mjs'
+import { runAsync, startChild, onShutdown, waitForHttp, shutdown } from './lib/processes.mjs'
 import { startPostgres, stopServer } from './lib/postgres.mjs'
 import { ensureDependencies, ensureBuild, sessionPassword, startMailSink, startObjectStore, runDbScript } from './lib/setup.mjs'
 import { ensureChromium } from './lib/chromium.mjs'
@@ -18,26 +18,30 @@ if (scratch) onShutdown(() => rmSync(scratch, { recursive: true, force: true }))
 // `npm test -- api browser` runs only those parts (lint, types, unit, api, browser); no argument runs all.
 const only = new Set(process.argv.slice(2))
 const wanted = (part) => only.size === 0 || only.has(part)
-const step = (name, fn, part) => {
+const step = async (name, fn, part) => {
   if (part && !wanted(part)) return
   console.log(`\n[voltwright test] ${name}`)
-  return fn()
+  await fn()
 }
 const bin = (name) => join(root, 'node_modules', '.bin', name)
 
 try {
   mkdirSync(config.dataDir, { recursive: true })
-  step('dependencies', ensureDependencies)
-  step('lint', () => run(bin('eslint'), ['.'], { cwd: root }), 'lint')
-  step('type-check', () => run(bin('nuxt'), ['typecheck'], { cwd: root }), 'types')
-  step('unit tests', () => run(bin('vitest'), ['run', '--project', 'unit'], { cwd: root }), 'unit')
+  await step('dependencies', ensureDependencies)
+  await step('lint', () => runAsync(bin('eslint'), ['.'], { cwd: root }), 'lint')
+  await step('type-check', () => runAsync(bin('nuxt'), ['typecheck'], { cwd: root }), 'types')
+  await step('unit tests', () => runAsync(bin('vitest'), ['run', '--project', 'unit'], { cwd: root }), 'unit')
   const pgDir = join(config.dataDir, 'pg')
-  step('database', () => { process.env.PG_FSYNC = 'off'; if (startPostgres(pgDir, config.pgPort)) onShutdown(() => stopServer(pgDir)) })
+  await step('database', () => { process.env.PG_FSYNC = 'off'; if (startPostgres(pgDir, config.pgPort)) onShutdown(() => stopServer(pgDir)) })
   const env = serverEnv(config, sessionPassword(config.dataDir))
-  step('migrations and demo data', () => { runDbScript(config, env, 'migrate'); runDbScript(config, env, 'seed'); runDbScript(config, env, 'seed') })
+  await step('migrations and demo data', async () => {
+    await runDbScript(config, env, 'migrate')
+    await runDbScript(config, env, 'seed')
+    await runDbScript(config, env, 'seed') // a second run must change nothing
+  })
   startMailSink(config)
   startObjectStore(config)
-  step('build', ensureBuild)
+  await step('build', ensureBuild)
   startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
   await waitForHttp(`${config.baseUrl}/api/health`)
   const testEnv = {
@@ -49,8 +53,8 @@ try {
     VOLTWRIGHT_PG_DIR: pgDir,
     VOLTWRIGHT_PG_PORT: String(config.pgPort)
   }
-  step('API tests', () => { ensurePoppler(); return run(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }) }, 'api')
-  step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); run(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
+  await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }) }, 'api')
+  await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
   console.log('\n[voltwright test] all passed')
   await shutdown(0)
 } catch (e) {

@@ -13,6 +13,21 @@ export function run(cmd, args, options = {}) {
   return r
 }
 
+// The same, without blocking: a signal arriving meanwhile stops the command too (a build, npm ci, a test run).
+export function runAsync(cmd, args, options = {}) {
+  return new Promise((resolve, reject) => {
+    const child = spawn(cmd, args, { stdio: 'inherit', ...options })
+    const entry = { name: cmd, child }
+    children.push(entry)
+    child.on('error', reject)
+    child.on('exit', (code, signal) => {
+      children.splice(children.indexOf(entry), 1)
+      if (code === 0) resolve()
+      else reject(new Error(`${cmd} ${args.join(' ')} failed (${signal ?? `exit ${code}`})`))
+    })
+  })
+}
+
 export function startChild(name, cmd, args, options = {}) {
   const child = spawn(cmd, args, { stdio: ['ignore', 'inherit', 'inherit'], ...options })
   child.on('exit', (code, signal) => {
