@@ -4,6 +4,7 @@ import { existsSync, readFileSync, writeFileSync, readdirSync, statSync, mkdirSy
 import { join, relative } from 'node:path'
 import { root } from './config.mjs'
 import { run, startChild } from './processes.mjs'
+import { openHistoryForMigrations, protectHistory } from './history-guard.mjs'
 
 function hashFiles(paths) {
   const h = createHash('sha256')
@@ -56,6 +57,13 @@ export function startObjectStore(config) {
   return startChild('s3rver', bin, ['-d', dir, '-a', '127.0.0.1', '-p', String(config.s3Port), '--silent', '--configure-bucket', 'voltwright'])
 }
 
+// Schema changes run with the audit history owner's rights, handed back as soon as they finish.
 export function runDbScript(config, env, ...args) {
-  run(join(root, 'node_modules', '.bin', 'tsx'), [join(root, 'scripts', 'db.ts'), ...args], { cwd: root, env })
+  const changesSchema = args[0] === 'migrate' || args[0] === 'down'
+  if (changesSchema) openHistoryForMigrations(config.pgPort)
+  try {
+    run(join(root, 'node_modules', '.bin', 'tsx'), [join(root, 'scripts', 'db.ts'), ...args], { cwd: root, env })
+  } finally {
+    if (changesSchema) protectHistory(config.pgPort)
+  }
 }

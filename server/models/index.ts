@@ -39,4 +39,6 @@ export function initModels(sequelize: Sequelize) {
   Snag.belongsTo(User, { foreignKey: 'assigneeId', as: 'assignee' })
   Snag.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' })
   Readback.belongsTo(User, { foreignKey: 'recordedById', as: 'recordedBy' })
+  Readback.belongsTo(Profile, { foreignKey: 'profileId', as: 'profile' })
+  Readback.belongsTo(ProfileVersion, { foreignKey: 'versionId', as: 'version' })
 }

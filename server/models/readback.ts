@@ -1,4 +1,8 @@
-import { Model, DataTypes, type Sequelize, type InferAttributes, type InferCreationAttributes, type CreationOptional } from 'sequelize'
+import { Model, DataTypes, type Sequelize, type InferAttributes, type InferCreationAttributes, type CreationOptional, type NonAttribute } from 'sequelize'
+import type { ReadbackSource } from '../../shared/schemas/readback'
+import type { Profile } from './profile'
+import type { ProfileVersion } from './profile-version'
+import type { User } from './user'
 
 // What the car's controller was found to hold, compared with the signed-off version.
 export class Readback extends Model<InferAttributes<Readback>, InferCreationAttributes<Readback>> {
@@ -11,7 +15,13 @@ export class Readback extends Model<InferAttributes<Readback>, InferCreationAttr
   declare matches: boolean
   declare differences: CreationOptional<{ parameter: string, expected: number | null, found: number | null }[]>
   declare recordedById: number
+  declare source: CreationOptional<ReadbackSource>
+  declare readAt: CreationOptional<Date | null>
+  declare controller: CreationOptional<{ serial?: string, firmware?: string }>
   declare createdAt: CreationOptional<Date>
+  declare recordedBy?: NonAttribute<User>
+  declare profile?: NonAttribute<Profile>
+  declare version?: NonAttribute<ProfileVersion | null>
 
   static initModel(sequelize: Sequelize) {
     Readback.init({
@@ -24,6 +34,9 @@ export class Readback extends Model<InferAttributes<Readback>, InferCreationAttr
       matches: { type: DataTypes.BOOLEAN, allowNull: false },
       differences: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       recordedById: { type: DataTypes.INTEGER, allowNull: false },
+      source: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'typed' },
+      readAt: { type: DataTypes.DATE, allowNull: true },
+      controller: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
       createdAt: DataTypes.DATE
     }, { sequelize, tableName: 'readbacks', updatedAt: false })
   }

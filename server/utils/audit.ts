@@ -31,12 +31,12 @@ export function sha256Hex(text: string): string {
 }
 
 // What the hash covers: everything but the id and the hash itself (the id is assigned by the database).
+// Spelled out in canonical key order (canonicalJson's output for this object), since the verifier runs it on every event.
 export function auditHashBody(row: Omit<AuditRow, 'id' | 'hash'>): string {
-  return canonicalJson({
-    workshopId: row.workshopId, vehicleId: row.vehicleId ?? null, actorId: row.actorId ?? null,
-    action: row.action, entityType: row.entityType, entityId: String(row.entityId), data: row.data,
-    createdAt: new Date(row.createdAt).toISOString()
-  })
+  const n = (x: number | null | undefined) => (x === null || x === undefined ? 'null' : canonicalJson(x))
+  return `{"action":${JSON.stringify(row.action)},"actorId":${n(row.actorId)},"createdAt":${JSON.stringify(new Date(row.createdAt).toISOString())},`
+    + `${row.data === undefined ? '' : `"data":${canonicalJson(row.data)},`}"entityId":${JSON.stringify(String(row.entityId))},"entityType":${JSON.stringify(row.entityType)},`
+    + `"vehicleId":${n(row.vehicleId)},"workshopId":${n(row.workshopId)}}`
 }
 
 export function auditHash(prevHash: string | null, row: Omit<AuditRow, 'id' | 'hash'>): string {

@@ -75,6 +75,8 @@ export async function signOffRoadTest(user: SignedIn, id: number) {
     const from = vehicle!.status
     const to = statusAfterSignOff(unresolved)
     if (from !== to) await vehicle!.update({ status: to }, { transaction })
+    // The car now holds a road-tested, signed-off version, so an earlier read-back difference no longer stands.
+    await clearDrift(transaction, vehicle!.id, { actorId: user.id, versionId: version!.id, reason: `${version!.origin === 'roadside' ? 'Roadside' : 'Workshop'} version ${version!.versionNo} of ${profile!.name} signed off after its road test` })
     await appendAuditEvent(transaction, {
       workshopId: user.workshopId, vehicleId: vehicle!.id, actorId: user.id, action: 'version.signed-off', entityType: 'version', entityId: version!.id,
       data: { roadTestId: rt!.id, versionNo: version!.versionNo, profileId: profile!.id, profileName: profile!.name, contentHash, versionContentHash: version!.contentHash, supersededVersionId: previousId, vehicleStatus: { from, to }, unresolvedSnags: unresolved }

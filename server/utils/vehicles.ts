@@ -11,6 +11,7 @@ export function vehicleView(v: Vehicle): VehicleView {
     chassisNumber: v.chassisNumber, registration: v.registration, status: v.status, spec: v.spec,
     ownerUserId: v.ownerUserId, owner: v.owner ? { id: v.owner.id, name: v.owner.name } : null,
     platform: v.platform ? { key: v.platform.key, name: v.platform.name } : null,
+    driftedAt: v.driftedAt ?? null,
     createdAt: v.createdAt, updatedAt: v.updatedAt
   }
 }

@@ -64,6 +64,7 @@ export interface VehicleView {
   ownerUserId: number | null
   owner: { id: number, name: string } | null
   platform: { key: string, name: string } | null
+  driftedAt: Date | string | null
   createdAt: Date | string
   updatedAt: Date | string
 }

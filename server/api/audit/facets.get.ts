@@ -1,0 +1,13 @@
+import { facetsQuerySchema } from '../../../shared/schemas/history'
+
+// The actions and people a car's (or the workshop's) history holds, for the filter menus.
+export default defineEventHandler(async (event) => {
+  const { vehicleId } = await getValidatedQuery(event, zodValidator(facetsQuerySchema))
+  if (vehicleId) {
+    const { user } = await requireVehicle(event, vehicleId)
+    await requireStaff(event)
+    return historyFacets({ workshopId: user.workshopId, vehicleId })
+  }
+  const user = await requireRole(event, 'auditor', 'admin', 'engineer')
+  return historyFacets({ workshopId: user.workshopId })
+})

@@ -1,0 +1,6 @@
+export default defineEventHandler(async (event) => {
+  const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
+  const { vehicle } = await requireVehicle(event, id)
+  await requireStaff(event)
+  return listReadbacks(vehicle)
+})

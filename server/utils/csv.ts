@@ -1,0 +1,9 @@
+// RFC 4180 quoting; a cell a spreadsheet would run as a formula is prefixed with an apostrophe (OWASP CSV injection).
+export function csvCell(value: string): string {
+  const safe = /^[=+\-@\t\r]/.test(value) && !/^-?\d+(\.\d+)?$/.test(value) ? `'${value}` : value
+  return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe
+}
+
+export function csvLine(cells: string[]): string {
+  return `${cells.map(csvCell).join(',')}\r\n`
+}

@@ -1,0 +1,8 @@
+// A car as its owner sees it: no people, notes, evaluations or internal snags.
+export interface ClientCarView {
+  car: { id: number, stockRef: string, make: string, model: string, year: number, registration: string, status: string, statusLabel: string }
+  onCar: { profile: string, versionNo: number, words: string[] }[]
+  roadTest: { testedAt: string, verdict: 'pass' | 'fail', surface: string } | null
+  enhancements: { id: number, title: string, detail: string, status: string }[]
+  handoverPdf: string
+}

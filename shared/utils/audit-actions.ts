@@ -1,0 +1,64 @@
+// Plain words for the actions the history records; an action not listed here is shown as written.
+export const auditActionLabels: Record<string, string> = {
+  'vehicle.created': 'Car booked in',
+  'vehicle.updated': 'Car\'s facts changed',
+  'vehicle.drift-cleared': 'Drift cleared',
+  'user.created': 'Person added',
+  'user.updated': 'Person changed',
+  'profile.created': 'Profile created',
+  'version.created': 'Version drafted',
+  'version.updated': 'Draft edited',
+  'version.submitted': 'Sent for review',
+  'version.withdrawn': 'Withdrawn from review',
+  'version.approved': 'Approved',
+  'version.rejected': 'Sent back',
+  'version.signed-off': 'Signed off onto the car',
+  'version.superseded': 'Superseded',
+  'road-test.recorded': 'Road test recorded',
+  'road-test.signed': 'Road test signed',
+  'road-test.telemetry': 'Controller log uploaded',
+  'snag.created': 'Snag raised',
+  'snag.updated': 'Snag changed',
+  'readback.matched': 'Read-back matches the car\'s profile',
+  'readback.differs': 'Read-back differs: drift',
+  'platform.created': 'Drive unit added'
+}
+
+export function auditActionLabel(action: string): string {
+  return auditActionLabels[action] ?? action
+}
+
+// Parameter and field names as the history shows them ("/spec/kerbMassKg" → "spec › kerbMassKg").
+export function changePathLabel(path: string): string {
+  return path.replace(/^\//, '').split('/').map(s => s.replace(/~1/g, '/').replace(/~0/g, '~')).join(' › ') || '(whole record)'
+}
+
+export function changeValueText(value: unknown): string {
+  if (value === undefined) return '—'
+  if (value === null) return 'none'
+  if (Array.isArray(value) && value.every(v => typeof v !== 'object')) return value.join(', ') || '(empty)'
+  if (typeof value === 'object') return JSON.stringify(value)
+  return String(value)
+}
+
+const detailLabels: Record<string, string> = {
+  source: 'Came in as', matches: 'Matches the car\'s profile', profile: 'Profile', versionNo: 'Version', readAt: 'Read from the controller at',
+  controller: 'Controller', differences: 'Differences', reason: 'Reason', verdict: 'Verdict', roadTestId: 'Road test no.', versionId: 'Version id',
+  profileId: 'Profile id', passwordChanged: 'Password changed'
+}
+
+export function detailLabel(key: string): string {
+  return detailLabels[key] ?? key
+}
+
+// A detail as words: read-back differences as "parameter: signed off → found", yes/no for true/false.
+export function detailText(key: string, value: unknown): string {
+  if (key === 'differences' && Array.isArray(value)) {
+    return value.map((d: { parameter?: string, expected?: unknown, found?: unknown }) => `${d.parameter}: ${changeValueText(d.expected ?? null)} signed off → ${changeValueText(d.found ?? null)} found`).join('; ') || 'none'
+  }
+  if (typeof value === 'boolean') return value ? 'yes' : 'no'
+  if (value && typeof value === 'object' && !Array.isArray(value)) {
+    return Object.entries(value).map(([k, v]) => `${k} ${changeValueText(v)}`).join(', ') || '—'
+  }
+  return changeValueText(value)
+}

@@ -1,0 +1,71 @@
+import { readdirSync } from 'node:fs'
+import { join, relative, resolve } from 'node:path'
+import { describe, it, expect } from 'vitest'
+import { useRunningServer, signIn, withDatabase } from './helpers'
+import { addOnCarProfile, addSnag, newCar, userId } from './fixtures'
+
+const apiDir = resolve(import.meta.dirname, '..', '..', 'server', 'api')
+
+// Routes that change no workshop data: they only open or close the caller's own session.
+const SESSION_ONLY = new Set(['auth/login.post.ts', 'auth/logout.post.ts'])
+
+interface Route { file: string, method: string, segments: string[] }
+
+// Every route file under server/api, read from the disk, so a new route is walked without anyone listing it.
+function routeFiles(dir = apiDir): Route[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((d) => {
+    const full = join(dir, d.name)
+    if (d.isDirectory()) return routeFiles(full)
+    const m = /^(.*)\.(get|post|patch|put|delete)\.ts$/.exec(d.name)
+    if (!m) return []
+    const rel = relative(apiDir, full)
+    const segments = [...relative(apiDir, dir).split('/').filter(Boolean), ...(m[1] === 'index' ? [] : [m[1]!])]
+    return [{ file: rel, method: m[2]!.toUpperCase(), segments }]
+  })
+}
+
+describe('an auditor reads everything and changes nothing', async () => {
+  await useRunningServer()
+  const auditor = await signIn('auditor@voltwright.test')
+  const tuner = await signIn('tuner@voltwright.test')
+  const car = await newCar(tuner)
+  const { profileId, versionId, roadTestId } = await addOnCarProfile(car.id, { roadTest: 'pass' })
+  const snagId = await addSnag(car.id, 'remedial', 'Offside rear drum binding')
+  // A real thing of the auditor's own workshop behind each kind of id, so the only reason to refuse is the role.
+  const ids: Record<string, string> = {
+    'vehicles': String(car.id), 'profiles': String(profileId), 'versions': String(versionId), 'road-tests': String(roadTestId),
+    'snags': String(snagId), 'users': String(await userId('tuner@voltwright.test')), 'platforms': 'fenlow-45'
+  }
+  const urlFor = (r: Route) => `/api/${r.segments.map((s, i) => {
+    if (!/^\[.+\]$/.test(s)) return s
+    const id = ids[r.segments[i - 1] ?? '']
+    if (!id) throw new Error(`${r.file}: no test id for a "${r.segments[i - 1]}" parameter; add one to the auditor walk`)
+    return id
+  }).join('/')}`
+
+  const routes = routeFiles()
+  const mutating = routes.filter(r => r.method !== 'GET' && !SESSION_ONLY.has(r.file))
+
+  it('finds the route files on disk', () => {
+    expect(routes.length).toBeGreaterThan(15)
+    expect(mutating.map(r => r.file)).toEqual(expect.arrayContaining(['vehicles/index.post.ts', 'vehicles/[id].patch.ts', 'vehicles/[id]/readback.post.ts', 'users/index.post.ts']))
+  })
+
+  it('answers 403 to the auditor on every route that changes data, and nothing changes', async () => {
+    const count = () => withDatabase(async c => Number((await c.query('SELECT (SELECT count(*) FROM audit_events) + (SELECT count(*) FROM mail_outbox) AS n')).rows[0].n))
+    const before = await count()
+    const answers: string[] = []
+    for (const r of mutating) {
+      const res = await auditor.call(r.method, urlFor(r), {})
+      answers.push(`${r.method} ${r.file} → ${res.status}`)
+    }
+    expect(answers).toEqual(mutating.map(r => `${r.method} ${r.file} → 403`))
+    expect(await count()).toBe(before)
+  })
+
+  it('reads the car, its history, its read-backs and the activity feed', async () => {
+    for (const path of [`/api/vehicles/${car.id}`, `/api/vehicles/${car.id}/history`, `/api/vehicles/${car.id}/readbacks`, '/api/audit/events', '/api/audit/verify', '/api/drift', '/api/vehicles']) {
+      expect((await auditor.call('GET', path)).status, path).toBe(200)
+    }
+  })
+})

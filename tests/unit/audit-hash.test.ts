@@ -1,0 +1,63 @@
+import { createHash } from 'node:crypto'
+import { describe, it, expect } from 'vitest'
+import fc from 'fast-check'
+import { auditHash, auditHashBody, sha256Hex } from '../../server/utils/audit'
+import { canonicalJson } from '../../shared/utils/canonical-json'
+
+const event = {
+  workshopId: 1, vehicleId: 7, actorId: 3, action: 'vehicle.updated', entityType: 'vehicle', entityId: '7',
+  data: { patch: [{ op: 'replace', path: '/status', value: 'converting' }] }, createdAt: '2026-12-01T09:30:00.000Z', prevHash: null
+}
+
+describe('the audit chain\'s hash', () => {
+  it('is SHA-256: the FIPS 180-4 example', () => {
+    // FIPS 180-4, Appendix B.1 (SHA-256 of the one-block message "abc")
+    expect(sha256Hex('abc')).toBe('ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad')
+  })
+
+  it('covers the previous hash followed by the event\'s canonical JSON, keys sorted, without id or hash', () => {
+    const body = auditHashBody(event)
+    expect(body).toBe('{"action":"vehicle.updated","actorId":3,"createdAt":"2026-12-01T09:30:00.000Z","data":{"patch":[{"op":"replace","path":"/status","value":"converting"}]},"entityId":"7","entityType":"vehicle","vehicleId":7,"workshopId":1}')
+    const prev = 'ab'.repeat(32)
+    expect(auditHash(prev, event)).toBe(createHash('sha256').update(prev + body).digest('hex'))
+    expect(auditHash(null, event)).toBe(createHash('sha256').update(body).digest('hex'))
+  })
+
+  it('changes when any covered field or the link changes, and not with key order', () => {
+    const base = auditHash(null, event)
+    expect(auditHash('00', event)).not.toBe(base)
+    expect(auditHash(null, { ...event, action: 'vehicle.created' })).not.toBe(base)
+    expect(auditHash(null, { ...event, createdAt: '2026-12-01T09:30:00.001Z' })).not.toBe(base)
+    expect(auditHash(null, { ...event, data: { patch: [{ value: 'converting', path: '/status', op: 'replace' }] } })).toBe(base)
+    expect(auditHash(null, { ...event, createdAt: new Date('2026-12-01T09:30:00Z') as unknown as string })).toBe(base)
+  })
+})
+
+// The plain definition the fast canonicalJson must agree with: sorted keys, no whitespace, undefined dropped.
+function reference(value: unknown): string {
+  if (value === null || typeof value !== 'object') return typeof value === 'number' && !Number.isFinite(value) ? 'null' : JSON.stringify(value ?? null)
+  if (Array.isArray(value)) return `[${value.map(reference).join(',')}]`
+  const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+  return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${reference(v)}`).join(',')}}`
+}
+
+describe('canonical JSON', () => {
+  it('agrees with its plain definition on any JSON value', () => {
+    fc.assert(fc.property(fc.jsonValue(), (v) => { expect(canonicalJson(v)).toBe(reference(v)) }), { numRuns: 500 })
+    expect(canonicalJson({ b: 1, a: [true, null, 'x"y'], c: undefined, é: -0, Z: 1e21 })).toBe('{"Z":1e+21,"a":[true,null,"x\\"y"],"b":1,"é":0}')
+  })
+})
+
+describe('the hashed body', () => {
+  it('is exactly the canonical JSON of the event without id and hash', () => {
+    const events = fc.record({
+      workshopId: fc.integer({ min: 1 }), vehicleId: fc.option(fc.integer({ min: 1 }), { nil: null }), actorId: fc.option(fc.integer({ min: 1 }), { nil: null }),
+      action: fc.string(), entityType: fc.string(), entityId: fc.string(), data: fc.dictionary(fc.string(), fc.jsonValue()),
+      createdAt: fc.date({ min: new Date('2000-01-01'), max: new Date('2100-01-01'), noInvalidDate: true }).map(d => d.toISOString()), prevHash: fc.constant(null)
+    })
+    fc.assert(fc.property(events, (e) => {
+      const { prevHash: _p, ...covered } = e
+      expect(auditHashBody(e)).toBe(reference({ ...covered, createdAt: new Date(e.createdAt).toISOString() }))
+    }), { numRuns: 300 })
+  })
+})
