@@ -50,8 +50,9 @@ function roadTest(w: SheetWriter, p: HandoverProfile) {
   const cols = [w.left, w.left + 110, w.left + 190, w.left + 350]
   const widths = [105, 75, 155, w.width - 300]
   const heads = ['Check', 'Verdict', 'Measured', 'Note']
-  heads.forEach((h, i) => w.text(h, { x: cols[i], y: w.doc.y, width: widths[i], size: 8.5, weight: 'semibold', color: ink.mute }))
-  w.doc.y += 12
+  const headY = w.doc.y
+  heads.forEach((h, i) => w.text(h, { x: cols[i], y: headY, width: widths[i], size: 8.5, weight: 'semibold', color: ink.mute }))
+  w.doc.y = headY + 14
   for (const c of rt.checks) {
     const h = Math.max(w.height(c.measured, widths[2]!, 9), w.height(c.note || '—', widths[3]!, 8.5), 12) + 6
     w.ensure(h)

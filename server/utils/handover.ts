@@ -3,7 +3,7 @@
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../models'
 import { HANDOVER_CAUTIONS, type HandoverProfile, type HandoverSheet } from '../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../shared/schemas/road-test'
-import { checkTitles } from '../../shared/schemas/road-test-checks'
+import { checkGuides, checkTitles } from '../../shared/schemas/road-test-checks'
 import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../shared/schemas/snag'
 import { vehicleStatusLabels, type VehicleStatus } from '../../shared/schemas/vehicle'
 import type { TelemetrySummary } from '../../shared/telemetry/summary'
@@ -11,8 +11,11 @@ import { carFactLines, figureLines, settingLines } from './handover-words'
 
 const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
 
-function measured(values: Record<string, unknown>): string {
-  return Object.entries(values ?? {}).filter(([, v]) => v !== null && v !== undefined && v !== '')
+// In the order the check's guide lists its values (JSONB does not keep the order they were sent in).
+function measured(key: string, values: Record<string, unknown>): string {
+  const order = checkGuides.find(g => g.key === key)?.fields.map(f => f.name) ?? []
+  const rank = (k: string) => (order.includes(k) ? order.indexOf(k) : order.length)
+  return Object.entries(values ?? {}).sort(([a], [b]) => rank(a) - rank(b)).filter(([, v]) => v !== null && v !== undefined && v !== '')
     .map(([k, v]) => typeof v === 'number' ? `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} ${units[k] ?? k}` : `${k}: ${String(v)}`).join(', ') || '—'
 }
 
@@ -46,7 +49,7 @@ async function profileSheet(vehicle: Vehicle, profile: Profile, version: Profile
     roadTest: rt ? {
       id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), tester, verdict: rt.verdict,
       conditions: `${surfaceLabels[rt.conditions.surface]} road, ${rt.conditions.ambientC} °C${rt.conditions.route ? `, ${rt.conditions.route}` : ''}`,
-      checks: rt.checks.map(c => ({ label: checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict, measured: measured(c.values), note: c.note })),
+      checks: rt.checks.map(c => ({ label: checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict, measured: measured(c.key, c.values), note: c.note })),
       log: logLines(log?.summary as TelemetrySummary | undefined)
     } : null,
     people: [

@@ -6,11 +6,6 @@ import type { SignedIn } from './guards'
 import type { RoadsideVersionInput } from '../../shared/schemas/road-test'
 import { canonicalJson } from '../../shared/utils/canonical-json'
 
-// The same content hash as every version: SHA-256 of the canonical JSON of its content, never its state.
-function roadsideContentHash(c: { profileId: number, versionNo: number, parentVersionId: number, parameters: Record<string, number>, rationale: string, authorId: number }) {
-  return sha256Hex(canonicalJson({ ...c, origin: 'roadside' }))
-}
-
 export async function recordRoadsideVersion(user: SignedIn, roadTestId: number, input: RoadsideVersionInput) {
   const rt = await findRoadTest(user, roadTestId)
   const tested = await ProfileVersion.findByPk(rt.versionId)
@@ -28,10 +23,9 @@ export async function recordRoadsideVersion(user: SignedIn, roadTestId: number, 
     const [{ next }] = await sequelize.query<{ next: number }>('SELECT coalesce(max("versionNo"), 0) + 1 AS next FROM profile_versions WHERE "profileId" = :p', { replacements: { p: profile!.id }, type: QueryTypes.SELECT, transaction }) as [{ next: number }]
     const now = new Date()
     const content = { profileId: profile!.id, versionNo: Number(next), parentVersionId: tested!.id, parameters: input.parameters, rationale: input.rationale, authorId: user.id }
-    const { curves: _curves, ...snapshot } = evaluation
     const version = await ProfileVersion.create({
       ...content, workshopId: user.workshopId, state: 'in-review', origin: 'roadside', roadTestId: rt.id,
-      evaluation: { ...snapshot, evaluatedAt: now.toISOString() }, contentHash: roadsideContentHash(content), submittedAt: now
+      evaluation: snapshotOf(evaluation, now) as unknown as Record<string, unknown>, contentHash: versionContentHash({ ...content, origin: 'roadside' }), submittedAt: now
     }, { transaction })
     await appendAuditEvent(transaction, {
       workshopId: user.workshopId, vehicleId: rt.vehicleId, actorId: user.id, action: 'version.roadside-recorded', entityType: 'version', entityId: version.id,
