@@ -19,7 +19,7 @@ export async function verifyChain(workshopId: number, batch = BATCH): Promise<Ve
   const fetch = (after: string) => db.query<AuditRow>(
     `SELECT id, "workshopId", "vehicleId", "actorId", action, "entityType", "entityId", data, "createdAt", "prevHash", hash
      FROM audit_events WHERE "workshopId" = :workshopId AND id > :after AND id <= :headId ORDER BY id LIMIT :batch`,
-    { replacements: { workshopId, after, headId: head.id, batch }, type: QueryTypes.SELECT })
+    { replacements: { workshopId, after, headId: head.id, batch }, type: QueryTypes.SELECT, raw: true })
   let prevHash: string | null = null
   let checked = 0
   let rows = await fetch('0')
