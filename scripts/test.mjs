@@ -1,5 +1,5 @@
 // `npm test`: the whole suite from nothing, on its own ports and a throw-away data folder.
-import { mkdtempSync, rmSync, chmodSync, mkdirSync } from 'node:fs'
+import { mkdtempSync, rmSync, chmodSync, mkdirSync, readdirSync, readFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { root, stackConfig, serverEnv } from './lib/config.mjs'
@@ -25,6 +25,12 @@ const step = async (name, fn, part) => {
 }
 const bin = (name) => join(root, 'node_modules', '.bin', name)
 
+function stopRestarted(dir) {
+  for (const file of readdirSync(dir)) {
+    try { process.kill(Number(readFileSync(join(dir, file), 'utf8')), 'SIGTERM') } catch { /* already gone */ }
+  }
+}
+
 try {
   mkdirSync(config.dataDir, { recursive: true })
   await step('dependencies', ensureDependencies)
@@ -39,8 +45,13 @@ try {
     await runDbScript(config, env, 'seed')
     await runDbScript(config, env, 'seed') // a second run must change nothing
   })
-  startMailSink(config)
-  startObjectStore(config)
+  // The fault tests stop these two and start them again (tests/api/services.ts): not fatal here, and what
+  // they start is recorded in the data folder and stopped with the rest.
+  const mailSink = startMailSink(config, { critical: false })
+  const objectStore = startObjectStore(config, { critical: false })
+  const restartedDir = join(config.dataDir, 'restarted-services')
+  mkdirSync(restartedDir, { recursive: true })
+  onShutdown(() => stopRestarted(restartedDir))
   await step('build', ensureBuild)
   startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
   await waitForHttp(`${config.baseUrl}/api/health`)
@@ -51,7 +62,10 @@ try {
     VOLTWRIGHT_ADMIN_DATABASE_URL: config.adminDatabaseUrl,
     VOLTWRIGHT_MAIL_API: `http://127.0.0.1:${config.mailWebPort}`,
     VOLTWRIGHT_PG_DIR: pgDir,
-    VOLTWRIGHT_PG_PORT: String(config.pgPort)
+    VOLTWRIGHT_PG_PORT: String(config.pgPort),
+    VOLTWRIGHT_MAIL_SINK: JSON.stringify({ pid: mailSink.pid, command: mailSink.spawnargs }),
+    VOLTWRIGHT_OBJECT_STORE: JSON.stringify({ pid: objectStore.pid, command: objectStore.spawnargs }),
+    VOLTWRIGHT_RESTARTED_DIR: restartedDir
   }
   await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }) }, 'api')
   await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')

@@ -46,10 +46,11 @@ let stopping = false
 export async function shutdown(code = 0) {
   if (stopping) return
   stopping = true
+  const gone = (child) => child.exitCode !== null || child.signalCode !== null
   for (const { child } of children.reverse()) {
-    if (child.exitCode === null) child.kill('SIGTERM')
+    if (!gone(child)) child.kill('SIGTERM')
   }
-  await Promise.all(children.map(({ child }) => child.exitCode !== null ? null : new Promise(r => { child.once('exit', r); setTimeout(r, 5000) })))
+  await Promise.all(children.map(({ child }) => gone(child) ? null : new Promise(r => { child.once('exit', r); setTimeout(r, 5000) })))
   for (const fn of stoppers.reverse()) {
     try { await fn() } catch (e) { console.error(e.message) }
   }

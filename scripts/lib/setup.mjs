@@ -45,16 +45,16 @@ export function sessionPassword(dataDir) {
   return readFileSync(file, 'utf8').trim()
 }
 
-export function startMailSink(config) {
+export function startMailSink(config, options = {}) {
   const bin = join(root, 'node_modules', '.bin', 'maildev')
-  return startChild('maildev', bin, ['--smtp', String(config.smtpPort), '--web', String(config.mailWebPort), '--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--silent'])
+  return startChild('maildev', bin, ['--smtp', String(config.smtpPort), '--web', String(config.mailWebPort), '--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--silent'], options)
 }
 
-export function startObjectStore(config) {
+export function startObjectStore(config, options = {}) {
   const dir = join(config.dataDir, 's3')
   mkdirSync(dir, { recursive: true })
   const bin = join(root, 'node_modules', '.bin', 's3rver')
-  return startChild('s3rver', bin, ['-d', dir, '-a', '127.0.0.1', '-p', String(config.s3Port), '--silent', '--configure-bucket', 'voltwright'])
+  return startChild('s3rver', bin, ['-d', dir, '-a', '127.0.0.1', '-p', String(config.s3Port), '--silent', '--configure-bucket', 'voltwright'], options)
 }
 
 // Schema changes run with the audit history owner's rights, handed back as soon as they finish.

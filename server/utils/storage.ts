@@ -16,8 +16,19 @@ export function objectStore(): S3Client {
     credentials: { accessKeyId: config.s3AccessKeyId || 'S3RVER', secretAccessKey: config.s3SecretAccessKey || 'S3RVER' },
     // Without these the SDK frames streamed bodies with checksums that s3rver stores verbatim (PACKAGES.md).
     requestChecksumCalculation: 'WHEN_REQUIRED',
-    responseChecksumValidation: 'WHEN_REQUIRED'
+    responseChecksumValidation: 'WHEN_REQUIRED',
+    // A store that hangs must not hold a request for ever: give up on a silent connection or socket.
+    requestHandler: { connectionTimeout: 5000, requestTimeout: 30000 }
   })
+  // Every failure of the store is marked as the store's, so the error handler can tell it from the database's.
+  client.middlewareStack.add(next => async (args) => {
+    try {
+      return await next(args)
+    } catch (e) {
+      if (e && typeof e === 'object') Object.assign(e, { objectStore: true })
+      throw e
+    }
+  }, { step: 'initialize', name: 'voltwrightMarkObjectStoreErrors' })
   return client
 }
 
