@@ -7,8 +7,9 @@ import { Upload } from '@aws-sdk/lib-storage'
 let client: S3Client | undefined
 
 export function objectStore(): S3Client {
+  if (client) return client
   const config = useRuntimeConfig()
-  client ??= new S3Client({
+  client = new S3Client({
     endpoint: config.s3Endpoint,
     region: 'us-east-1',
     forcePathStyle: true,
@@ -20,7 +21,8 @@ export function objectStore(): S3Client {
     // A store that hangs must not hold a request for ever: give up on a silent connection or socket.
     requestHandler: { connectionTimeout: 5000, requestTimeout: 30000 }
   })
-  // Every failure of the store is marked as the store's, so the error handler can tell it from the database's.
+  // Every failure of the store is marked as the store's, so the error handler can tell it from the database's
+  // (added once, with the client).
   client.middlewareStack.add(next => async (args) => {
     try {
       return await next(args)
