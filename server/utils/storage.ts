@@ -7,8 +7,9 @@ import { Upload } from '@aws-sdk/lib-storage'
 let client: S3Client | undefined
 
 export function objectStore(): S3Client {
+  if (client) return client
   const config = useRuntimeConfig()
-  client ??= new S3Client({
+  client = new S3Client({
     endpoint: config.s3Endpoint,
     region: 'us-east-1',
     forcePathStyle: true,
