@@ -55,8 +55,8 @@ describe('the SMTP sink and the object store down', async () => {
     const committed = await withDatabase(async c => (await c.query(
       `SELECT pv.state, (SELECT count(*)::int FROM audit_events a WHERE a."entityType" = 'version' AND a."entityId" = pv.id::text AND a.action = 'version.submitted') AS events
          FROM profile_versions pv WHERE pv.id = $1`, [draft.id])).rows[0])
-    expect(committed).toEqual({ state: 'submitted', events: 1 })
-    expect((await lead.call('GET', `/api/versions/${draft.id}`)).body.state).toBe('submitted')
+    expect(committed).toEqual({ state: 'in-review', events: 1 })
+    expect((await lead.call('GET', `/api/versions/${draft.id}`)).body.state).toBe('in-review')
 
     // The sender keeps trying (2 s, then 4 s later …): the mail waits, pending, with its attempts and the error.
     await expect.poll(async () => Math.min(...(await outboxFor(link)).map(r => r.attempts)), { timeout: 30000, interval: 500 }).toBeGreaterThanOrEqual(2)
