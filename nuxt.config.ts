@@ -1,3 +1,5 @@
+import { fileURLToPath } from 'node:url'
+
 // Voltwright: Nuxt 4 app, Nitro server routes, PostgreSQL through Sequelize.
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
@@ -25,14 +27,19 @@ export default defineNuxtConfig({
     databaseUrl: 'postgres://voltwright@127.0.0.1:54329/voltwright',
     s3Endpoint: 'http://127.0.0.1:4569',
     s3Bucket: 'voltwright',
+    s3AccessKeyId: '',
+    s3SecretAccessKey: '',
     smtpHost: '127.0.0.1',
     smtpPort: 1025,
     mailFrom: 'Voltwright <register@voltwright.test>',
     public: { baseUrl: 'http://localhost:3000' }
   },
   nitro: {
-    // Sequelize loads its dialect by name at run time; keep these as real node modules.
-    externals: { external: ['sequelize', 'pg', 'pg-hstore'] }
+    // Sequelize loads its dialect by name at run time; pdfkit reads its font data and sharp loads its
+    // native binding from their own folders: keep these as real node modules.
+    externals: { external: ['sequelize', 'pg', 'pg-hstore', 'pdfkit', 'sharp'] },
+    // IBM Plex Sans for the handover PDF, as WOFF (pdfkit cannot read WOFF2; PACKAGES.md).
+    serverAssets: [{ baseName: 'fonts', dir: fileURLToPath(new URL('./node_modules/@fontsource/ibm-plex-sans/files', import.meta.url)), pattern: 'ibm-plex-sans-latin*-{400,600}-normal.woff' }]
   },
   security: {
     headers: {

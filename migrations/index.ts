@@ -3,6 +3,7 @@ import * as foundation from './20261201-0001-foundation'
 import * as auditEvents from './20261201-0002-audit-events'
 import * as profilesAndReviews from './20261201-0003-profiles-and-reviews'
 import * as roadTestsAndSnags from './20261201-0004-road-tests-and-snags'
+import * as roadTestFiles from './20261201-0006-road-test-files'
 import * as history from './20261201-0007-history'
 
 export const migrations = [
@@ -10,5 +11,6 @@ export const migrations = [
   { name: '20261201-0002-audit-events', ...auditEvents },
   { name: '20261201-0003-profiles-and-reviews', ...profilesAndReviews },
   { name: '20261201-0004-road-tests-and-snags', ...roadTestsAndSnags },
+  { name: '20261201-0006-road-test-files', ...roadTestFiles },
   { name: '20261201-0007-history', ...history }
 ]

@@ -10,15 +10,15 @@ const config = stackConfig({ PORT: 3000, DATA_DIR: '.data', PG_PORT: 54329, S3_P
 
 try {
   mkdirSync(config.dataDir, { recursive: true, mode: 0o755 })
-  ensureDependencies()
+  await ensureDependencies()
   const pgDir = join(config.dataDir, 'pg')
   if (startPostgres(pgDir, config.pgPort)) onShutdown(() => stopServer(pgDir))
   const env = serverEnv(config, sessionPassword(config.dataDir))
-  runDbScript(config, env, 'migrate')
-  runDbScript(config, env, 'seed')
+  await runDbScript(config, env, 'migrate')
+  await runDbScript(config, env, 'seed')
   startMailSink(config)
   startObjectStore(config)
-  ensureBuild()
+  await ensureBuild()
   startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
   await waitForHttp(`${config.baseUrl}/api/health`)
   console.log(`

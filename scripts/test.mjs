@@ -1,12 +1,13 @@
 // `npm test`: the whole suite from nothing, on its own ports and a throw-away data folder.
-import { mkdtempSync, rmSync, chmodSync, mkdirSync } from 'node:fs'
+import { mkdtempSync, rmSync, chmodSync, mkdirSync, readdirSync, readFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { root, stackConfig, serverEnv } from './lib/config.mjs'
-import { run, startChild, onShutdown, waitForHttp, shutdown } from './lib/processes.mjs'
+import { runAsync, startChild, onShutdown, waitForHttp, shutdown } from './lib/processes.mjs'
 import { startPostgres, stopServer } from './lib/postgres.mjs'
 import { ensureDependencies, ensureBuild, sessionPassword, startMailSink, startObjectStore, runDbScript } from './lib/setup.mjs'
 import { ensureChromium } from './lib/chromium.mjs'
+import { ensurePoppler } from './lib/poppler.mjs'
 
 // A folder under the system temp dir, so the `postgres` user can reach it wherever the clone lives.
 const scratch = process.env.DATA_DIR ? null : mkdtempSync(join(tmpdir(), 'voltwright-test-'))
@@ -17,26 +18,41 @@ if (scratch) onShutdown(() => rmSync(scratch, { recursive: true, force: true }))
 // `npm test -- api browser` runs only those parts (lint, types, unit, api, browser); no argument runs all.
 const only = new Set(process.argv.slice(2))
 const wanted = (part) => only.size === 0 || only.has(part)
-const step = (name, fn, part) => {
+const step = async (name, fn, part) => {
   if (part && !wanted(part)) return
   console.log(`\n[voltwright test] ${name}`)
-  return fn()
+  await fn()
 }
 const bin = (name) => join(root, 'node_modules', '.bin', name)
 
+function stopRestarted(dir) {
+  for (const file of readdirSync(dir)) {
+    try { process.kill(Number(readFileSync(join(dir, file), 'utf8')), 'SIGTERM') } catch { /* already gone */ }
+  }
+}
+
 try {
   mkdirSync(config.dataDir, { recursive: true })
-  step('dependencies', ensureDependencies)
-  step('lint', () => run(bin('eslint'), ['.'], { cwd: root }), 'lint')
-  step('type-check', () => run(bin('nuxt'), ['typecheck'], { cwd: root }), 'types')
-  step('unit tests', () => run(bin('vitest'), ['run', '--project', 'unit'], { cwd: root }), 'unit')
+  await step('dependencies', ensureDependencies)
+  await step('lint', () => runAsync(bin('eslint'), ['.'], { cwd: root }), 'lint')
+  await step('type-check', () => runAsync(bin('nuxt'), ['typecheck'], { cwd: root }), 'types')
+  await step('unit tests', () => runAsync(bin('vitest'), ['run', '--project', 'unit'], { cwd: root }), 'unit')
   const pgDir = join(config.dataDir, 'pg')
-  step('database', () => { process.env.PG_FSYNC = 'off'; if (startPostgres(pgDir, config.pgPort)) onShutdown(() => stopServer(pgDir)) })
+  await step('database', () => { process.env.PG_FSYNC = 'off'; if (startPostgres(pgDir, config.pgPort)) onShutdown(() => stopServer(pgDir)) })
   const env = serverEnv(config, sessionPassword(config.dataDir))
-  step('migrations and demo data', () => { runDbScript(config, env, 'migrate'); runDbScript(config, env, 'seed'); runDbScript(config, env, 'seed') })
-  startMailSink(config)
-  startObjectStore(config)
-  step('build', ensureBuild)
+  await step('migrations and demo data', async () => {
+    await runDbScript(config, env, 'migrate')
+    await runDbScript(config, env, 'seed')
+    await runDbScript(config, env, 'seed') // a second run must change nothing
+  })
+  // The fault tests stop these two and start them again (tests/api/services.ts): not fatal here, and what
+  // they start is recorded in the data folder and stopped with the rest.
+  const mailSink = startMailSink(config, { critical: false })
+  const objectStore = startObjectStore(config, { critical: false })
+  const restartedDir = join(config.dataDir, 'restarted-services')
+  mkdirSync(restartedDir, { recursive: true })
+  onShutdown(() => stopRestarted(restartedDir))
+  await step('build', ensureBuild)
   startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
   await waitForHttp(`${config.baseUrl}/api/health`)
   const testEnv = {
@@ -46,10 +62,13 @@ try {
     VOLTWRIGHT_ADMIN_DATABASE_URL: config.adminDatabaseUrl,
     VOLTWRIGHT_MAIL_API: `http://127.0.0.1:${config.mailWebPort}`,
     VOLTWRIGHT_PG_DIR: pgDir,
-    VOLTWRIGHT_PG_PORT: String(config.pgPort)
+    VOLTWRIGHT_PG_PORT: String(config.pgPort),
+    VOLTWRIGHT_MAIL_SINK: JSON.stringify({ pid: mailSink.pid, command: mailSink.spawnargs }),
+    VOLTWRIGHT_OBJECT_STORE: JSON.stringify({ pid: objectStore.pid, command: objectStore.spawnargs }),
+    VOLTWRIGHT_RESTARTED_DIR: restartedDir
   }
-  step('API tests', () => run(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }), 'api')
-  step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); run(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
+  await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }) }, 'api')
+  await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
   console.log('\n[voltwright test] all passed')
   await shutdown(0)
 } catch (e) {

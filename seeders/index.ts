@@ -1,8 +1,12 @@
 // Demo data, in order; run once each (the seed_runs table remembers), so running again changes nothing.
 import * as demoWorkshop from './20261201-0001-demo-workshop'
+import * as demoProfiles from './20261201-0002-demo-profiles'
+import * as demoRoadTests from './20261201-0003-demo-road-tests'
 import * as demoReadbacks from './20261201-0004-demo-readbacks'
 
 export const seeders = [
   { name: '20261201-0001-demo-workshop', ...demoWorkshop },
+  { name: '20261201-0002-demo-profiles', ...demoProfiles },
+  { name: '20261201-0003-demo-road-tests', ...demoRoadTests },
   { name: '20261201-0004-demo-readbacks', ...demoReadbacks }
 ]

@@ -1,5 +1,21 @@
-export interface PlatformView { id: number, key: string, name: string, motorMaxRpm: number, schema: Record<string, unknown> }
+import type { PlatformUpload } from '~~/shared/schemas/platform'
+
+export interface PlatformView { id: number, key: string, name: string, motorMaxRpm: number, schema: Record<string, unknown>, shared: boolean }
 
 export function usePlatforms() {
-  return useFetch<{ items: PlatformView[], total: number }>('/api/platforms', { key: 'platforms' })
+  const list = useFetch<{ items: PlatformView[], total: number }>('/api/platforms', { key: 'platforms' })
+  async function upload(input: PlatformUpload) {
+    const created = await $fetch<PlatformView>('/api/platforms', { method: 'POST', body: input })
+    await list.refresh()
+    return created
+  }
+  return { ...list, upload }
+}
+
+export function usePlatform(key: MaybeRefOrGetter<string | null | undefined>) {
+  return useFetch<PlatformView>(() => `/api/platforms/${encodeURIComponent(toValue(key) ?? '')}`, {
+    key: () => `platform-${toValue(key)}`,
+    immediate: Boolean(toValue(key)),
+    watch: [() => toValue(key)]
+  })
 }

@@ -13,6 +13,21 @@ export function run(cmd, args, options = {}) {
   return r
 }
 
+// The same, without blocking: a signal arriving meanwhile stops the command too (a build, npm ci, a test run).
+export function runAsync(cmd, args, options = {}) {
+  return new Promise((resolve, reject) => {
+    const child = spawn(cmd, args, { stdio: 'inherit', ...options })
+    const entry = { name: cmd, child }
+    children.push(entry)
+    child.on('error', reject)
+    child.on('exit', (code, signal) => {
+      children.splice(children.indexOf(entry), 1)
+      if (code === 0) resolve()
+      else reject(new Error(`${cmd} ${args.join(' ')} failed (${signal ?? `exit ${code}`})`))
+    })
+  })
+}
+
 export function startChild(name, cmd, args, options = {}) {
   const child = spawn(cmd, args, { stdio: ['ignore', 'inherit', 'inherit'], ...options })
   child.on('exit', (code, signal) => {
@@ -31,10 +46,11 @@ let stopping = false
 export async function shutdown(code = 0) {
   if (stopping) return
   stopping = true
+  const gone = (child) => child.exitCode !== null || child.signalCode !== null
   for (const { child } of children.reverse()) {
-    if (child.exitCode === null) child.kill('SIGTERM')
+    if (!gone(child)) child.kill('SIGTERM')
   }
-  await Promise.all(children.map(({ child }) => child.exitCode !== null ? null : new Promise(r => { child.once('exit', r); setTimeout(r, 5000) })))
+  await Promise.all(children.map(({ child }) => gone(child) ? null : new Promise(r => { child.once('exit', r); setTimeout(r, 5000) })))
   for (const fn of stoppers.reverse()) {
     try { await fn() } catch (e) { console.error(e.message) }
   }

@@ -12,6 +12,8 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
   declare bytes: number
   declare sha256: string
   declare uploadedBy: number
+  declare thumbnailKey: CreationOptional<string | null>
+  declare caption: CreationOptional<string>
   declare createdAt: CreationOptional<Date>
 
   static initModel(sequelize: Sequelize) {
@@ -26,6 +28,8 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
       bytes: { type: DataTypes.BIGINT, allowNull: false },
       sha256: { type: DataTypes.TEXT, allowNull: false },
       uploadedBy: { type: DataTypes.INTEGER, allowNull: false },
+      thumbnailKey: { type: DataTypes.TEXT, allowNull: true },
+      caption: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
       createdAt: DataTypes.DATE
     }, { sequelize, tableName: 'attachments', updatedAt: false })
   }

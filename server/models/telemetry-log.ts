@@ -7,6 +7,7 @@ export class TelemetryLog extends Model<InferAttributes<TelemetryLog>, InferCrea
   declare attachmentId: number
   declare sampleCount: number
   declare summary: Record<string, number | null>
+  declare series: CreationOptional<Record<string, number[]> | null>
   declare createdAt: CreationOptional<Date>
 
   static initModel(sequelize: Sequelize) {
@@ -17,6 +18,7 @@ export class TelemetryLog extends Model<InferAttributes<TelemetryLog>, InferCrea
       attachmentId: { type: DataTypes.INTEGER, allowNull: false },
       sampleCount: { type: DataTypes.INTEGER, allowNull: false },
       summary: { type: DataTypes.JSONB, allowNull: false },
+      series: { type: DataTypes.JSONB, allowNull: true },
       createdAt: DataTypes.DATE
     }, { sequelize, tableName: 'telemetry_logs', updatedAt: false })
   }

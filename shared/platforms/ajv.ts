@@ -1,5 +1,5 @@
 // Server-side JSON Schema tools for platform schemas (ajv compiles code, so not for the browser).
-import Ajv2020, { type ErrorObject, type ValidateFunction } from 'ajv/dist/2020'
+import Ajv2020, { type ErrorObject, type ValidateFunction } from 'ajv/dist/2020.js'
 import { PARAMETER_NAMES } from '../compute/parameters'
 import type { PlatformLike } from '../compute/types'
 import { JSON_SCHEMA_2020_12 } from './define'

@@ -40,10 +40,19 @@ describe('PostgreSQL stopped while requests flow', async () => {
     const spec = (await tuner.call('GET', `/api/vehicles/${carId}`)).body.spec
     const prefix = unique('F').slice(0, 12)
     const create = (i: number) => tuner.call('POST', '/api/vehicles', { stockRef: `${prefix}-${i}`, make: 'Faultby', model: 'Survivor', year: 1970, platformKey, spec })
-    const flowing = Array.from({ length: 30 }, (_, i) => new Promise(r => setTimeout(r, i * 15)).then(() => create(i)))
-    await new Promise(r => setTimeout(r, 200))
-    const stopped = stopServerAsync(pgDir)
-    const answers = await Promise.all(flowing)
+    // Four writers keep creating cars; PostgreSQL is stopped once a few have committed, while others are in flight.
+    const answers: Awaited<ReturnType<typeof create>>[] = []
+    let next = 0
+    let stopped: Promise<void> | null = null
+    const writer = async () => {
+      while (next < 400) {
+        const answer = await create(next++)
+        answers.push(answer)
+        if (!stopped && answers.filter(a => a.status === 201).length >= 3) stopped = stopServerAsync(pgDir)
+        if (stopped && answers.filter(a => a.status === 503).length >= 4) return
+      }
+    }
+    await Promise.all([writer(), writer(), writer(), writer()])
     await stopped
     startServer(pgDir, pgPort)
     expect(answers.map(a => a.status).filter(s => s !== 201 && s !== 503)).toEqual([])

@@ -1,0 +1,70 @@
+import type { RoadTestCreate, RoadsideVersionInput } from '~~/shared/schemas/road-test'
+import type { AwaitingRoadTest, RoadTestChart, RoadTestListItem, RoadTestView } from '~~/shared/schemas/road-test-views'
+import type { Severity } from '~~/shared/compute/types'
+
+export interface RoadTestBrief {
+  version: { id: number, versionNo: number, state: string, authorId: number, parameters: Record<string, number> }
+  profile: { id: number, name: string }
+  vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null }
+  platformSchema: { properties?: Record<string, { title: string, unit: string, minimum: number, maximum: number, multipleOf: number }> } | null
+  expected: { maxStartGradePct: number | null, creepHoldGradePct: number | null, liftOffDecelMs2: number | null, brakeRegenDecelMs2: number | null, topSpeedKph: number | null, zeroTo50S: number | null, regenGripLimitMs2: { dry: number | null, wet: number | null, snow: number | null } }
+  warnings: { rule: string, severity: Severity, message: string }[]
+}
+
+export interface SignOffMissing { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }
+
+export function useRoadTestBrief(versionId: MaybeRefOrGetter<number>) {
+  // Waits for a version id (the road-test page learns it from the record it loads first).
+  return useFetch<RoadTestBrief>(() => `/api/versions/${toValue(versionId)}/road-test-brief`, { key: () => `road-test-brief-${toValue(versionId)}`, immediate: toValue(versionId) > 0 })
+}
+
+export function useVehicleRoadTests(vehicleId: MaybeRefOrGetter<number>) {
+  return useFetch<{ items: RoadTestListItem[], total: number }>(() => `/api/vehicles/${toValue(vehicleId)}/road-tests`, { key: () => `vehicle-road-tests-${toValue(vehicleId)}` })
+}
+
+export function useAwaitingRoadTests() {
+  return useFetch<{ items: AwaitingRoadTest[], total: number }>('/api/road-tests/awaiting', { key: 'road-tests-awaiting' })
+}
+
+export function useRoadTest(id: MaybeRefOrGetter<number>) {
+  const record = useFetch<RoadTestView>(() => `/api/road-tests/${toValue(id)}`, { key: () => `road-test-${toValue(id)}` })
+  const chart = useFetch<RoadTestChart>(() => `/api/road-tests/${toValue(id)}/chart`, { key: () => `road-test-chart-${toValue(id)}` })
+
+  async function refreshAll() {
+    await Promise.all([record.refresh(), chart.refresh()])
+  }
+  async function signOff() {
+    const result = await $fetch(`/api/road-tests/${toValue(id)}/sign-off`, { method: 'POST' })
+    await refreshAll()
+    return result
+  }
+  async function recordRoadside(input: RoadsideVersionInput) {
+    const created = await $fetch<{ id: number, versionNo: number }>(`/api/road-tests/${toValue(id)}/roadside-version`, { method: 'POST', body: input })
+    await record.refresh()
+    return created
+  }
+  return { record, chart, refreshAll, signOff, recordRoadside }
+}
+
+export async function saveRoadTest(versionId: number, input: RoadTestCreate) {
+  return $fetch<RoadTestView>(`/api/versions/${versionId}/road-tests`, { method: 'POST', body: input })
+}
+
+export interface UploadAnswer<T = unknown> { status: number, body: T & { message?: string, data?: Record<string, unknown> } }
+
+// XMLHttpRequest rather than fetch: only XHR reports upload progress in every browser.
+export function uploadWithProgress<T>(url: string, file: File, onProgress: (fraction: number) => void): Promise<UploadAnswer<T>> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest()
+    const form = new FormData()
+    form.append('file', file, file.name)
+    xhr.open('POST', url)
+    xhr.responseType = 'json'
+    xhr.upload.onprogress = (e) => {
+      if (e.lengthComputable) onProgress(e.loaded / e.total)
+    }
+    xhr.onload = () => resolve({ status: xhr.status, body: (xhr.response ?? {}) as UploadAnswer<T>['body'] })
+    xhr.onerror = () => reject(new Error('The upload did not reach the server. Check the connection and try again.'))
+    xhr.send(form)
+  })
+}

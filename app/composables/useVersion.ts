@@ -1,0 +1,38 @@
+import type { VersionDiff, VersionView } from '~~/shared/schemas/profile-views'
+
+export interface DraftChanges { lockVersion: number, parameters?: Record<string, number>, rationale?: string }
+
+// One version (the tune sheet) and what its author and reviewers can do with it.
+export function useVersion(id: MaybeRefOrGetter<number>) {
+  const data = useFetch<VersionView>(() => `/api/versions/${toValue(id)}`, { key: () => `version-${toValue(id)}` })
+  const act = async (path: string, body: Record<string, unknown> = {}) => {
+    const v = await $fetch<VersionView>(`/api/versions/${toValue(id)}/${path}`, { method: 'POST', body })
+    await data.refresh()
+    return v
+  }
+
+  async function save(changes: DraftChanges) {
+    const v = await $fetch<VersionView>(`/api/versions/${toValue(id)}`, { method: 'PATCH', body: changes })
+    await data.refresh()
+    return v
+  }
+
+  // A new draft that starts from this version (any version can be the starting point).
+  async function startFrom() {
+    return $fetch<VersionView>(`/api/profiles/${data.data.value!.profileId}/versions`, { method: 'POST', body: { fromVersionId: toValue(id) } })
+  }
+
+  return {
+    ...data,
+    save,
+    startFrom,
+    submit: (justifications: Record<string, string>) => act('submit', { justifications }),
+    withdraw: () => act('withdraw'),
+    approve: (comment: string) => act('approve', { comment }),
+    reject: (comment: string) => act('reject', { comment })
+  }
+}
+
+export function useVersionDiff(a: MaybeRefOrGetter<number>, b: MaybeRefOrGetter<number>) {
+  return useFetch<VersionDiff>(() => `/api/versions/${toValue(a)}/diff/${toValue(b)}`, { key: () => `diff-${toValue(a)}-${toValue(b)}` })
+}

@@ -1,0 +1,7 @@
+export default defineEventHandler(async (event) => {
+  const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
+  const user = await requireRole(event, 'tester')
+  const stored = await uploadTelemetry(event, user, id).catch(uploadError)
+  setResponseStatus(event, 201)
+  return stored
+})

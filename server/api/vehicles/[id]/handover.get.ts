@@ -1,0 +1,5 @@
+export default defineEventHandler(async (event) => {
+  const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
+  const { vehicle } = await requireVehicle(event, id)
+  return handoverSheet(vehicle)
+})

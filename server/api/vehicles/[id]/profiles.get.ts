@@ -1,0 +1,6 @@
+export default defineEventHandler(async (event) => {
+  const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
+  const { vehicle } = await requireVehicle(event, id)
+  const user = await requireStaff(event)
+  return listProfiles(user, vehicle)
+})

@@ -1,0 +1,8 @@
+import { diffParamsSchema } from '../../../../../shared/schemas/profile'
+
+// From version :id (before) to version :other (after): {rows, figures, warnings, patch, evaluations}.
+export default defineEventHandler(async (event) => {
+  const { id, other } = await getValidatedRouterParams(event, zodValidator(diffParamsSchema))
+  const user = await requireStaff(event)
+  return diffVersions(user, id, other)
+})

@@ -1,0 +1,9 @@
+import { roadTestCreateSchema } from '../../../../shared/schemas/road-test'
+
+export default defineEventHandler(async (event) => {
+  const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
+  const user = await requireRole(event, 'tester')
+  const input = await readValidatedBody(event, zodValidator(roadTestCreateSchema))
+  setResponseStatus(event, 201)
+  return recordRoadTest(user, id, input)
+})

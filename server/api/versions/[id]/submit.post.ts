@@ -1,0 +1,8 @@
+import { submitSchema } from '../../../../shared/schemas/profile'
+
+export default defineEventHandler(async (event) => {
+  const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
+  const user = await requireRole(event, 'tuner')
+  const input = await readValidatedBody(event, zodValidator(submitSchema))
+  return submitVersion(user, id, input)
+})

@@ -1,0 +1,40 @@
+// The handover sheet's content, the same for the screen and the PDF.
+import type { Severity } from '../compute/types'
+
+export interface HandoverLine { label: string, value: string, note?: string }
+export interface HandoverWarning { rule: string, severity: Severity, message: string, justification: string | null }
+export interface HandoverPerson { role: string, name: string, at: string | null, hash: string | null, hashLabel: string }
+
+export interface HandoverProfile {
+  profileName: string
+  versionNo: number
+  versionId: number
+  signedOffAt: string | null
+  settings: HandoverLine[]
+  figures: HandoverLine[]
+  warnings: HandoverWarning[]
+  roadTest: {
+    id: number, testedAt: string, tester: string, verdict: 'pass' | 'fail', conditions: string
+    checks: { label: string, verdict: string, measured: string, note: string }[]
+    log: HandoverLine[]
+  } | null
+  people: HandoverPerson[]
+}
+
+export interface HandoverSheet {
+  workshop: string
+  generatedAt: string
+  car: { id: number, title: string, stockRef: string, registration: string, chassisNumber: string, owner: string | null, driveUnit: string, status: string }
+  carFacts: HandoverLine[]
+  profiles: HandoverProfile[]
+  enhancements: { title: string, detail: string, priority: string }[]
+  cautions: string[]
+}
+
+export const HANDOVER_CAUTIONS = [
+  'These controller settings were proposed, reviewed by a senior engineer who did not write them, and proved on a road test on the date shown. They suit this car as it was when tested: a change of tyres, brakes, suspension, battery or load can make them unsuitable.',
+  'Regenerative braking slows the car when you lift off the accelerator. On a rear-driven car it brakes the rear wheels alone: on wet, icy or loose roads, lift off gently and allow more distance.',
+  'The car must meet the rules that apply where it is driven (registration, type or individual approval, periodic inspection, insurance). Tell your insurer about the conversion. Where this sheet and local regulations differ, the regulations apply.',
+  'Do not change the controller settings yourself. Any change should be made, reviewed and road-tested by a qualified engineer, and recorded as a new version on the register.',
+  'Have the brakes, tyres and high-voltage system inspected at the intervals your workshop recommends, and straight away after any warning light, fault or collision.'
+]

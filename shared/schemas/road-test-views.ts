@@ -1,0 +1,45 @@
+// Road tests as the API answers them.
+import type { CheckKey, CheckVerdict } from './road-test'
+import type { TelemetrySummary } from '../telemetry/summary'
+import type { TelemetrySeries } from '../telemetry/downsample'
+
+export interface CheckView { key: CheckKey, verdict: CheckVerdict, values: Record<string, number | string | null>, note: string }
+export interface AttachmentView { id: number, filename: string, contentType: string, bytes: number, sha256: string, caption: string, hasThumbnail: boolean, createdAt: string }
+export interface TelemetryView { id: number, attachment: AttachmentView, summary: TelemetrySummary, createdAt: string }
+
+export interface RoadTestView {
+  id: number
+  vehicleId: number
+  version: { id: number, versionNo: number, state: string, profileId: number, profileName: string, authorId: number, contentHash: string }
+  vehicle: { id: number, stockRef: string, make: string, model: string, year: number, status: string }
+  tester: { id: number, name: string }
+  testedAt: string
+  conditions: { surface: 'dry' | 'wet' | 'snow', ambientC: number, route: string }
+  checks: CheckView[]
+  verdict: 'pass' | 'fail'
+  signed: { testerId: number, at: string, contentHash: string } | null
+  telemetry: TelemetryView[]
+  photos: AttachmentView[]
+  roadsideVersions: { id: number, versionNo: number, state: string }[]
+}
+
+export interface RoadTestListItem {
+  id: number, testedAt: string, verdict: 'pass' | 'fail', signed: boolean, testerName: string
+  versionId: number, versionNo: number, profileName: string, failedChecks: CheckKey[]
+}
+
+// Measured beside predicted: the model's figures for the tested version against the log and the checks.
+export interface ModelComparison {
+  liftOffDecel: { predictedMs2: number | null, measuredMs2: number | null, gripLimitMs2: number | null }
+  startGrade: { predictedMaxPct: number | null, testedPct: number | null, limitedBy: string | null }
+  rollback: { measuredM: number | null, reportedMm: number | null }
+  topSpeed: { predictedKph: number | null, measuredKph: number | null }
+}
+
+export interface RoadTestChart { series: TelemetrySeries | null, comparison: ModelComparison }
+
+export interface AwaitingRoadTest {
+  versionId: number, versionNo: number, profileId: number, profileName: string, approvedAt: string | null
+  vehicle: { id: number, stockRef: string, make: string, model: string, year: number }
+  roadTests: number
+}

@@ -1,0 +1,76 @@
+import { execFileSync } from 'node:child_process'
+import { mkdtempSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import { describe, it, expect } from 'vitest'
+import { useRunningServer, signIn, baseUrl } from './helpers'
+import { approvedVersion, newCar, newClient, newProfile, recordRoadTest } from './road-test-fixtures'
+
+// poppler's pdftotext (Debian poppler-utils, installed by the test command) reads the text back.
+function pdfText(pdf: Buffer): string {
+  const dir = mkdtempSync(join(tmpdir(), 'voltwright-pdf-'))
+  writeFileSync(join(dir, 'sheet.pdf'), pdf)
+  return execFileSync('pdftotext', ['-layout', join(dir, 'sheet.pdf'), '-'], { encoding: 'utf8' })
+}
+const fonts = (pdf: Buffer) => execFileSync('pdffonts', ['-'], { input: pdf, encoding: 'utf8' })
+
+describe('handover sheet', async () => {
+  await useRunningServer()
+  const tuner = await signIn('tuner@voltwright.test')
+  const tester = await signIn('tester@voltwright.test')
+  const owner = await newClient(await signIn('admin@voltwright.test'))
+  const client = await signIn(owner.email, 'owner-password-123')
+  const clientId = owner.id
+  const car = await newCar(tuner, { ownerUserId: clientId, make: 'Łowicz', model: 'Coupé Särkkä' })
+  const profileId = await newProfile(car.id)
+  const versionId = await approvedVersion(profileId, { parameters: { powerCapKw: 80, liftOffRegenPct: 20 } })
+  const roadTestId = await recordRoadTest(tester, versionId)
+  await tester.call('POST', `/api/vehicles/${car.id}/snags`, { kind: 'enhancement', title: 'Offer a second charging cable', detail: 'Type 2 to domestic plug' })
+  const get = (who: { cookie: string }, path: string) => fetch(`${baseUrl}${path}`, { headers: { cookie: who.cookie } })
+
+  it('409 before sign-off: the sheet follows sign-off', async () => {
+    const res = await get(tuner, `/api/vehicles/${car.id}/handover.pdf`)
+    expect(res.status).toBe(409)
+  })
+
+  it('is a real PDF with IBM Plex Sans embedded and the whole story in it', async () => {
+    const signed = await tester.call('POST', `/api/road-tests/${roadTestId}/sign-off`)
+    expect(signed.status).toBe(200)
+    const res = await get(tuner, `/api/vehicles/${car.id}/handover.pdf`)
+    expect(res.status).toBe(200)
+    expect(res.headers.get('content-type')).toBe('application/pdf')
+    expect(res.headers.get('content-disposition')).toContain(`handover-${car.stockRef}.pdf`)
+    const pdf = Buffer.from(await res.arrayBuffer())
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-')
+    expect(fonts(pdf)).toMatch(/IBMPlexSans/)
+    const text = pdfText(pdf)
+    expect(text).toContain('Handover sheet')
+    expect(text).toContain('1967 Łowicz Coupé Särkkä') // latin-ext letters print from the latin-ext face
+    expect(text).toContain(car.stockRef)
+    expect(text).toContain('Ottoline Marsh')
+    expect(text).toMatch(/Most power\s+80 kW \(107 hp\)/) // 80 kW / 0.74569987 kW per hp = 107.3 hp (NIST SP 811)
+    expect(text).toContain('Lift-off regen')
+    expect(text).toContain('PASSED')
+    expect(text).toMatch(/Hill start\s+Pass\s+18 % gradient, 60 mm/)
+    expect(text).toContain('roll-back')
+    expect(text).toContain('Offer a second charging cable')
+    expect(text).toMatch(/Proposed by\s+Dev Carrow/)
+    expect(text).toMatch(/Approved by\s+Maud Ellery/)
+    expect(text).toMatch(/signed off by\s+Sol Brannagh/)
+    expect(text.replace(/\s+/g, '')).toContain(signed.body.signed.contentHash)
+    expect(text).toContain('qualified engineer')
+    expect(text).toContain('regulations')
+    expect(text).toMatch(/page 1 of \d/)
+  })
+
+  it('the owner downloads their own; nobody else\'s; the JSON for the screen says the same', async () => {
+    expect((await get(client, `/api/vehicles/${car.id}/handover.pdf`)).status).toBe(200)
+    const someoneElses = await newCar(tuner)
+    expect((await get(client, `/api/vehicles/${someoneElses.id}/handover.pdf`)).status).toBe(404)
+    const sheet = await client.call('GET', `/api/vehicles/${car.id}/handover`)
+    expect(sheet.body.car.title).toBe('1967 Łowicz Coupé Särkkä')
+    expect(sheet.body.profiles[0].roadTest.verdict).toBe('pass')
+    expect(sheet.body.enhancements.map((e: { title: string }) => e.title)).toEqual(['Offer a second charging cable'])
+    expect(sheet.body.cautions.length).toBeGreaterThanOrEqual(3)
+  })
+})
