@@ -9,11 +9,15 @@ export function historyQuery(f: HistoryFilters) {
 
 const endpoint = (vehicleId?: number) => vehicleId ? `/api/vehicles/${vehicleId}/history` : '/api/audit/events'
 
+// Bumped by any action that writes to a car's history, so the timeline on screen reads it again.
+export const useHistoryRevision = (vehicleId?: number) => useState(`history-revision:${vehicleId ?? 'workshop'}`, () => 0)
+
 // One car's history, or the workshop's with no car: the first page through useFetch, older pages appended
 // by keyset cursor (each page continues below the last id shown, so nothing repeats as new events arrive).
 export function useHistory(vehicleId: MaybeRefOrGetter<number | undefined>, filters: Ref<HistoryFilters>, limit = 25) {
   const query = computed(() => ({ ...historyQuery(filters.value), limit }))
-  const first = useFetch<HistoryPage>(() => endpoint(toValue(vehicleId)), { key: () => `history:${toValue(vehicleId) ?? 'workshop'}:${JSON.stringify(query.value)}`, query })
+  const revision = useHistoryRevision(toValue(vehicleId))
+  const first = useFetch<HistoryPage>(() => endpoint(toValue(vehicleId)), { key: () => `history:${toValue(vehicleId) ?? 'workshop'}:${revision.value}:${JSON.stringify(query.value)}`, query })
   const older = ref<HistoryEntry[]>([])
   const olderCursor = ref<string | null | undefined>(undefined)
   const loadingOlder = ref(false)

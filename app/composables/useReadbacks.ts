@@ -6,10 +6,12 @@ export interface DriftedCar { id: number, stockRef: string, make: string, model:
 
 export function useReadbacks(vehicleId: MaybeRefOrGetter<number>) {
   const list = useFetch<ReadbackList>(() => `/api/vehicles/${toValue(vehicleId)}/readbacks`, { key: () => `readbacks-${toValue(vehicleId)}` })
+  const historyRevision = useHistoryRevision(toValue(vehicleId))
   async function record(body: ReadbackBody) {
     const saved = await $fetch<ReadbackView>(`/api/vehicles/${toValue(vehicleId)}/readback`, { method: 'POST', body })
     await list.refresh()
     await refreshNuxtData([`vehicle-${toValue(vehicleId)}`, 'drifted-cars'])
+    historyRevision.value++
     return saved
   }
   return { ...list, record }
