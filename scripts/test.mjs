@@ -23,6 +23,8 @@ const step = (name, fn, part) => {
   console.log(`\n[voltwright test] ${name}`)
   return fn()
 }
+// VOLTWRIGHT_API_FILES="route-guards bad-input" runs only those API test files (while working on them).
+const apiFiles = (process.env.VOLTWRIGHT_API_FILES ?? '').split(/\s+/).filter(Boolean)
 const bin = (name) => join(root, 'node_modules', '.bin', name)
 
 try {
@@ -49,7 +51,7 @@ try {
     VOLTWRIGHT_PG_DIR: pgDir,
     VOLTWRIGHT_PG_PORT: String(config.pgPort)
   }
-  step('API tests', () => { ensurePoppler(); return run(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }) }, 'api')
+  step('API tests', () => { ensurePoppler(); return run(bin('vitest'), ['run', '--project', 'api', ...apiFiles], { cwd: root, env: testEnv }) }, 'api')
   step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); run(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
   console.log('\n[voltwright test] all passed')
   await shutdown(0)
