@@ -13,7 +13,7 @@ export const testSpec = {
 }
 
 export async function newCar(as: Caller, extra: Record<string, unknown> = {}) {
-  const res = await as.call('POST', '/api/vehicles', { stockRef: unique('H').slice(0, 20), make: 'Testwick', model: 'Ledger Saloon', year: 1966, platformKey: 'fenlow-45', spec: testSpec, ...extra })
+  const res = await as.call('POST', '/api/vehicles', { stockRef: unique('XH').slice(0, 20), make: 'Testwick', model: 'Ledger Saloon', year: 1966, platformKey: 'fenlow-45', spec: testSpec, ...extra })
   if (res.status !== 201) throw new Error(`creating a car answered ${res.status}: ${JSON.stringify(res.body)}`)
   return res.body as { id: number, stockRef: string, workshopId?: number }
 }
