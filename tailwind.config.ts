@@ -12,7 +12,7 @@ export default {
         copper: { DEFAULT: '#a4551f', dark: '#7e3f14', light: '#f1dccb' },
         danger: { DEFAULT: '#b3261e', light: '#f9e0dd' },
         caution: { DEFAULT: '#f2c230', dark: '#6b5200', light: '#fdf3cf' },
-        pass: { DEFAULT: '#2e7d32', light: '#e0f0e1' }
+        pass: { DEFAULT: '#2e7d32', dark: '#1b5e20', light: '#e0f0e1' }
       },
       fontFamily: {
         sans: ['"IBM Plex Sans"', 'system-ui', 'sans-serif']

@@ -23,6 +23,8 @@ const step = async (name, fn, part) => {
   console.log(`\n[voltwright test] ${name}`)
   await fn()
 }
+// VOLTWRIGHT_API_FILES="route-guards bad-input" runs only those API test files (while working on them).
+const apiFiles = (process.env.VOLTWRIGHT_API_FILES ?? '').split(/\s+/).filter(Boolean)
 const bin = (name) => join(root, 'node_modules', '.bin', name)
 
 function stopRestarted(dir) {
@@ -67,7 +69,7 @@ try {
     VOLTWRIGHT_OBJECT_STORE: JSON.stringify({ pid: objectStore.pid, command: objectStore.spawnargs }),
     VOLTWRIGHT_RESTARTED_DIR: restartedDir
   }
-  await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api'], { cwd: root, env: testEnv }) }, 'api')
+  await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api', ...apiFiles], { cwd: root, env: testEnv }) }, 'api')
   await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
   console.log('\n[voltwright test] all passed')
   await shutdown(0)

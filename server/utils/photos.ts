@@ -33,6 +33,8 @@ export async function uploadPhoto(event: H3Event, user: SignedIn, owner: PhotoOw
     const expected = FORMATS[file.mimeType]
     if (!expected) throw new UploadRefused(415, `Photos must be JPEG, PNG or WebP images, not ${file.mimeType || 'a file of no stated type'}.`)
     const image = await readImage(file.stream)
+    // sharp throws outright (not a rejected promise) on an empty buffer.
+    if (!image.length) throw new UploadRefused(400, 'The photo is empty.', { fields: [{ path: 'file', message: 'The file is empty' }] })
     const meta = await sharp(image).metadata().catch(() => null)
     if (!meta || meta.format !== expected) throw new UploadRefused(415, `The file is not the ${expected.toUpperCase()} image it says it is.`)
     const thumbnail = await makeThumbnail(image)

@@ -1,30 +1,10 @@
-import { readdirSync } from 'node:fs'
-import { join, relative, resolve } from 'node:path'
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase } from './helpers'
 import { addOnCarProfile, addSnag, newCar, userId } from './fixtures'
+import { routeFiles, routeUrl, type Route } from './routes'
 
-const apiDir = resolve(import.meta.dirname, '..', '..', 'server', 'api')
-
-// Routes that change no workshop data: they only open or close the caller's own session.
-const SESSION_ONLY = new Set(['auth/login.post.ts', 'auth/logout.post.ts'])
-// POST only to carry its input: it computes and stores nothing, so the auditor may use it like a read.
-const READS_BY_POST = new Set(['evaluate.post.ts'])
-
-interface Route { file: string, method: string, segments: string[] }
-
-// Every route file under server/api, read from the disk, so a new route is walked without anyone listing it.
-function routeFiles(dir = apiDir): Route[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((d) => {
-    const full = join(dir, d.name)
-    if (d.isDirectory()) return routeFiles(full)
-    const m = /^(.*)\.(get|post|patch|put|delete)\.ts$/.exec(d.name)
-    if (!m) return []
-    const rel = relative(apiDir, full)
-    const segments = [...relative(apiDir, dir).split('/').filter(Boolean), ...(m[1] === 'index' ? [] : [m[1]!])]
-    return [{ file: rel, method: m[2]!.toUpperCase(), segments }]
-  })
-}
+// Routes that change no workshop data: they open or close the caller's own session, or compute and store nothing.
+const SESSION_ONLY = new Set(['auth/login.post.ts', 'auth/logout.post.ts', 'evaluate.post.ts'])
 
 describe('an auditor reads everything and changes nothing', async () => {
   await useRunningServer()
@@ -38,15 +18,14 @@ describe('an auditor reads everything and changes nothing', async () => {
     'vehicles': String(car.id), 'profiles': String(profileId), 'versions': String(versionId), 'road-tests': String(roadTestId),
     'snags': String(snagId), 'users': String(await userId('tuner@voltwright.test')), 'platforms': 'fenlow-45'
   }
-  const urlFor = (r: Route) => `/api/${r.segments.map((s, i) => {
-    if (!/^\[.+\]$/.test(s)) return s
-    const id = ids[r.segments[i - 1] ?? '']
-    if (!id) throw new Error(`${r.file}: no test id for a "${r.segments[i - 1]}" parameter; add one to the auditor walk`)
+  const urlFor = (r: Route) => routeUrl(r, (_param, before) => {
+    const id = ids[before]
+    if (!id) throw new Error(`${r.file}: no test id for a "${before}" parameter; add one to the auditor walk`)
     return id
-  }).join('/')}`
+  })
 
   const routes = routeFiles()
-  const mutating = routes.filter(r => r.method !== 'GET' && !SESSION_ONLY.has(r.file) && !READS_BY_POST.has(r.file))
+  const mutating = routes.filter(r => r.method !== 'GET' && !SESSION_ONLY.has(r.file))
 
   it('finds the route files on disk', () => {
     expect(routes.length).toBeGreaterThan(15)

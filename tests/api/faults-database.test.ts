@@ -38,7 +38,7 @@ describe('PostgreSQL stopped while requests flow', async () => {
   it('loses no committed change and half-writes none when the database stops mid-flow', async () => {
     const platformKey = (await tuner.call('GET', '/api/platforms')).body.items[0].key
     const spec = (await tuner.call('GET', `/api/vehicles/${carId}`)).body.spec
-    const prefix = unique('F').slice(0, 12)
+    const prefix = unique('XF').slice(0, 12)
     const create = (i: number) => tuner.call('POST', '/api/vehicles', { stockRef: `${prefix}-${i}`, make: 'Faultby', model: 'Survivor', year: 1970, platformKey, spec })
     // Four writers keep creating cars; PostgreSQL is stopped once a few have committed, while others are in flight.
     const answers: Awaited<ReturnType<typeof create>>[] = []

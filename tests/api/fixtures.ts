@@ -1,6 +1,5 @@
 // What the history tests need that other parts of the product create (profiles, signed-off versions, road
-// tests, snags, a second workshop), made directly in SQL as the application's role. Test cars' stock refs
-// start with X, so they sort after the demo cars that the browser tests open from the first page of the list.
+// tests, snags, a second workshop), made directly in SQL as the application's role.
 import { createHash } from 'node:crypto'
 import { defaultParameters, findPlatform } from '../../shared/platforms'
 import { canonicalJson } from '../../shared/utils/canonical-json'
@@ -14,7 +13,7 @@ export const testSpec = {
 }
 
 export async function newCar(as: Caller, extra: Record<string, unknown> = {}) {
-  const res = await as.call('POST', '/api/vehicles', { stockRef: unique('X').slice(0, 20), make: 'Testwick', model: 'Ledger Saloon', year: 1966, platformKey: 'fenlow-45', spec: testSpec, ...extra })
+  const res = await as.call('POST', '/api/vehicles', { stockRef: unique('XH').slice(0, 20), make: 'Testwick', model: 'Ledger Saloon', year: 1966, platformKey: 'fenlow-45', spec: testSpec, ...extra })
   if (res.status !== 201) throw new Error(`creating a car answered ${res.status}: ${JSON.stringify(res.body)}`)
   return res.body as { id: number, stockRef: string, workshopId?: number }
 }

@@ -1,5 +1,6 @@
 import { describe, it, expect, afterAll } from 'vitest'
 import { launch, signInThroughPage, shot, accessibilityProblems, baseUrl } from './helpers'
+import { approve, saveDraft, sendBack, sendForReview } from './steps'
 
 // One proposal's way through four eyes: the tuner edits and sends it, the engineer sends it back with a
 // comment, the tuner revises it as a new version, the engineer approves it.
@@ -24,12 +25,10 @@ describe('a tuner proposes, an engineer reviews', async () => {
     await page.locator('#param-powerCapKw').fill('60')
     await page.locator('#param-liftOffRegenPct').fill('10')
     await page.getByLabel('Rationale').fill('Town use: 60 kW and gentle lift-off while the owner gets used to it.')
-    await page.getByRole('button', { name: 'Save draft' }).click()
-    await expect.poll(() => page.getByRole('status').first().textContent()).toContain('Saved')
+    await saveDraft(page)
     await shot(page, 'versions-01-draft-saved')
     expect(await accessibilityProblems(page)).toEqual([])
-    await page.getByRole('button', { name: 'Send for review' }).click()
-    await expect.poll(() => page.locator('[data-state]').first().getAttribute('data-state')).toBe('in-review')
+    await sendForReview(page)
     await shot(page, 'versions-02-sent')
   })
 
@@ -40,10 +39,7 @@ describe('a tuner proposes, an engineer reviews', async () => {
     await page.waitForURL(firstUrl)
     await page.getByRole('button', { name: 'Send back to the tuner' }).click()
     await expect.poll(() => page.locator('#review-comment-error').textContent()).toContain('Say what needs to change')
-    await page.getByLabel('Comment').fill(comment)
-    await page.getByRole('button', { name: 'Send back to the tuner' }).click()
-    await expect.poll(() => page.locator('[data-state]').first().getAttribute('data-state')).toBe('rejected')
-    await expect.poll(() => page.locator('[data-action="version.rejected"]').textContent()).toContain(comment)
+    await sendBack(page, comment)
     expect(await accessibilityProblems(page)).toEqual([])
     await shot(page, 'versions-03-sent-back')
   })
@@ -57,10 +53,8 @@ describe('a tuner proposes, an engineer reviews', async () => {
     await page.getByRole('button', { name: 'Start a new version from v1' }).click()
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toContain('version 2')
     await page.locator('#param-liftOffRegenPct').fill('25')
-    await page.getByRole('button', { name: 'Save draft' }).click()
-    await expect.poll(() => page.getByRole('status').first().textContent()).toContain('Saved')
-    await page.getByRole('button', { name: 'Send for review' }).click()
-    await expect.poll(() => page.locator('[data-state]').first().getAttribute('data-state')).toBe('in-review')
+    await saveDraft(page)
+    await sendForReview(page)
     await shot(page, 'versions-05-revised-sent')
   })
 
@@ -75,9 +69,7 @@ describe('a tuner proposes, an engineer reviews', async () => {
     expect(await accessibilityProblems(page)).toEqual([])
     await shot(page, 'versions-06-compare')
     await page.goBack({ waitUntil: 'networkidle' })
-    await page.getByLabel('Comment').fill('Good: regen inside the rear grip in the wet.')
-    await page.getByRole('button', { name: 'Approve for road test' }).click()
-    await expect.poll(() => page.locator('[data-state]').first().getAttribute('data-state')).toBe('approved')
+    await approve(page, 'Good: regen inside the rear grip in the wet.')
     await shot(page, 'versions-07-approved')
   })
 })
