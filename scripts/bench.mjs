@@ -3,11 +3,10 @@
 import { mkdirSync, writeFileSync } from 'node:fs'
 import { loadavg, cpus } from 'node:os'
 import { join } from 'node:path'
-import { root, stackConfig, serverEnv } from './lib/config.mjs'
-import { run, startChild, onShutdown, waitForHttp, shutdown } from './lib/processes.mjs'
-import { startPostgres, stopServer, psql } from './lib/postgres.mjs'
-import { ensureDependencies, ensureBuild, sessionPassword, startMailSink, startObjectStore, runDbScript } from './lib/setup.mjs'
-import { measure } from './lib/load.mjs'
+import { root, stackConfig } from './lib/config.mjs'
+import { run, startChild, waitForHttp, shutdown } from './lib/processes.mjs'
+import { psql } from './lib/postgres.mjs'
+import { bringUp } from './lib/stack.mjs'
 
 const config = stackConfig({ PORT: 3050, DATA_DIR: '.bench-data', PG_PORT: 54359, S3_PORT: 4599, SMTP_PORT: 1055, MAIL_WEB_PORT: 1110 })
 const floorPort = Number(process.env.FLOOR_PORT || config.port + 1)
@@ -70,23 +69,17 @@ pessimistic and vary from run to run; compare product and floor, measured back t
 `
 }
 
-try {
-  mkdirSync(config.dataDir, { recursive: true, mode: 0o755 })
-  await ensureDependencies()
-  const pgDir = join(config.dataDir, 'pg')
-  if (startPostgres(pgDir, config.pgPort)) onShutdown(() => stopServer(pgDir))
-  const env = serverEnv(config, sessionPassword(config.dataDir))
-  await runDbScript(config, env, 'migrate')
-  await runDbScript(config, env, 'seed')
+// 200,000 audit events in one workshop, written once and kept in .bench-data.
+function addBigSeed(env) {
   const big = Number(sql(`SELECT count(*) FROM audit_events e JOIN workshops w ON w.id = e."workshopId" WHERE w.name = 'Ledger Hall Conversions'`))
   if (big < 200_000) run(bin('tsx'), [join(root, 'scripts', 'seed-big.ts'), '--events', String(200_000 - big)], { cwd: root, env })
   else console.log(`[bench] big seed already in place (${big.toLocaleString('en-GB')} events)`)
-  startMailSink(config)
-  startObjectStore(config)
-  await ensureBuild()
-  startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
+}
+
+try {
+  const { env } = await bringUp(config, { afterSeed: addBigSeed })
+  const { measure } = await import('./lib/load.mjs') // autocannon is there only once the dependencies are
   startChild('floor', bin('tsx'), [join(root, 'scripts', 'bench-floor.ts')], { env: { ...env, FLOOR_PORT: String(floorPort) }, cwd: root })
-  await waitForHttp(`${config.baseUrl}/api/health`)
   await waitForHttp(`${floorBase}/health`)
 
   const ledger = Number(sql(`SELECT id FROM workshops WHERE name = 'Ledger Hall Conversions'`))

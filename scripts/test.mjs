@@ -2,10 +2,10 @@
 import { mkdtempSync, rmSync, chmodSync, mkdirSync, readdirSync, readFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
-import { root, stackConfig, serverEnv } from './lib/config.mjs'
-import { runAsync, startChild, onShutdown, waitForHttp, shutdown } from './lib/processes.mjs'
-import { startPostgres, stopServer } from './lib/postgres.mjs'
-import { ensureDependencies, ensureBuild, sessionPassword, startMailSink, startObjectStore, runDbScript } from './lib/setup.mjs'
+import { root, stackConfig } from './lib/config.mjs'
+import { runAsync, onShutdown, shutdown } from './lib/processes.mjs'
+import { ensureDependencies } from './lib/setup.mjs'
+import { bringUp } from './lib/stack.mjs'
 import { ensureChromium } from './lib/chromium.mjs'
 import { ensurePoppler } from './lib/poppler.mjs'
 
@@ -39,24 +39,12 @@ try {
   await step('lint', () => runAsync(bin('eslint'), ['.'], { cwd: root }), 'lint')
   await step('type-check', () => runAsync(bin('nuxt'), ['typecheck'], { cwd: root }), 'types')
   await step('unit tests', () => runAsync(bin('vitest'), ['run', '--project', 'unit'], { cwd: root }), 'unit')
-  const pgDir = join(config.dataDir, 'pg')
-  await step('database', () => { process.env.PG_FSYNC = 'off'; if (startPostgres(pgDir, config.pgPort)) onShutdown(() => stopServer(pgDir)) })
-  const env = serverEnv(config, sessionPassword(config.dataDir))
-  await step('migrations and demo data', async () => {
-    await runDbScript(config, env, 'migrate')
-    await runDbScript(config, env, 'seed')
-    await runDbScript(config, env, 'seed') // a second run must change nothing
-  })
-  // The fault tests stop these two and start them again (tests/api/services.ts): not fatal here, and what
-  // they start is recorded in the data folder and stopped with the rest.
-  const mailSink = startMailSink(config, { critical: false })
-  const objectStore = startObjectStore(config, { critical: false })
   const restartedDir = join(config.dataDir, 'restarted-services')
   mkdirSync(restartedDir, { recursive: true })
   onShutdown(() => stopRestarted(restartedDir))
-  await step('build', ensureBuild)
-  startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
-  await waitForHttp(`${config.baseUrl}/api/health`)
+  // The fault tests stop the mail and object-store stand-ins and start them again (tests/api/services.ts):
+  // not fatal here, and what they start is recorded in the data folder and stopped with the rest.
+  const { env, pgDir, mailSink, objectStore } = await bringUp(config, { step, fsync: 'off', seedTwice: true, servicesCritical: false })
   const testEnv = {
     ...env,
     NODE_ENV: 'test',

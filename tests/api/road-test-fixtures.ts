@@ -1,17 +1,12 @@
-// Cars, approved versions and road tests for the road-test API tests. Until the versions API is on main,
-// approved versions are written by SQL as the application's role, hashed as every version is.
+// Cars, approved versions and road tests for the road-test API tests, made through the versions API itself.
 import { createHash } from 'node:crypto'
-import { canonicalJson } from '../../shared/utils/canonical-json'
 import { defaultParameters, findPlatform } from '../../shared/platforms/index'
-import { baseUrl, type Caller, unique, withDatabase } from './helpers'
+import { baseUrl, type Caller, signIn, unique } from './helpers'
+import { newProfile as newProfileWithDraft, submitAndApprove, testSpec } from './version-fixtures'
 
-export const testSpec = {
-  kerbMassKg: 1050, frontAxleLoadPct: 50, wheelbaseMm: 2400, cgHeightMm: 500, tyreSize: '165/80 R15 86S',
-  finalDriveRatio: 7.5, drivetrainEfficiency: 0.9, dragCoefficient: 0.42, frontalAreaM2: 1.8, rollingResistanceCoeff: 0.01,
-  drivenAxle: 'rear', originalEnginePowerKw: 55, packNominalVoltageV: 350, packCapacityKwh: 30,
-  packMaxChargeCurrentA: 100, packMaxDischargeCurrentA: 300, chargerPowerKw: 7
-}
+export { testSpec }
 export const PLATFORM = 'marrick-110'
+const TUNER = 'tuner@voltwright.test'
 
 export async function newCar(tuner: Caller, extra: Record<string, unknown> = {}): Promise<{ id: number, stockRef: string }> {
   const res = await tuner.call('POST', '/api/vehicles', { stockRef: unique('RT').slice(0, 20), make: 'Testwick', model: 'Road Saloon', year: 1967, platformKey: PLATFORM, spec: testSpec, ...extra })
@@ -19,34 +14,39 @@ export async function newCar(tuner: Caller, extra: Record<string, unknown> = {})
   return res.body
 }
 
-const idOf = (email: string) => withDatabase(async c => (await c.query('SELECT id, "workshopId" FROM users WHERE email = $1', [email])).rows[0] as { id: number, workshopId: number })
+const sessions = new Map<string, Promise<Caller>>()
+const as = (email: string) => {
+  if (!sessions.has(email)) sessions.set(email, signIn(email))
+  return sessions.get(email)!
+}
+// A new profile's first version, a draft of the demo tuner's, until approvedVersion takes it up.
+const firstDrafts = new Map<number, number>()
 
 export async function newProfile(vehicleId: number): Promise<number> {
-  return withDatabase(async (c) => {
-    const v = (await c.query('SELECT "workshopId" FROM vehicles WHERE id = $1', [vehicleId])).rows[0]
-    return (await c.query('INSERT INTO profiles ("workshopId", "vehicleId", name) VALUES ($1, $2, $3) RETURNING id', [v.workshopId, vehicleId, unique('Road')])).rows[0].id
-  })
+  const first = await newProfileWithDraft(await as(TUNER), vehicleId, { parameters: defaultParameters(findPlatform(PLATFORM)!), rationale: 'Test settings' })
+  firstDrafts.set(first.profileId, first.id)
+  return first.profileId
 }
 
-// Adds the next version of a profile, approved by the engineer (a review row as the review would write).
-export async function approvedVersion(profileId: number, o: { author?: string, reviewer?: string, parameters?: Record<string, number>, state?: string } = {}): Promise<number> {
-  const author = await idOf(o.author ?? 'tuner@voltwright.test')
-  const reviewer = await idOf(o.reviewer ?? 'engineer@voltwright.test')
+// The profile's next version, submitted by its author and approved by another engineer (or left in review).
+export async function approvedVersion(profileId: number, o: { author?: string, reviewer?: string, parameters?: Record<string, number>, state?: 'approved' | 'in-review' } = {}): Promise<number> {
+  const author = await as(o.author ?? TUNER)
   const parameters = { ...defaultParameters(findPlatform(PLATFORM)!), ...o.parameters }
-  return withDatabase(async (c) => {
-    await c.query('BEGIN')
-    await c.query('SELECT 1 FROM profiles WHERE id = $1 FOR UPDATE', [profileId])
-    const next = Number((await c.query('SELECT coalesce(max("versionNo"), 0) + 1 AS n FROM profile_versions WHERE "profileId" = $1', [profileId])).rows[0].n)
-    const content = { profileId, versionNo: next, parentVersionId: null, parameters, rationale: 'Test settings', authorId: author.id, origin: 'workshop' }
-    const hash = createHash('sha256').update(canonicalJson(content)).digest('hex')
-    const state = o.state ?? 'approved'
-    const id = (await c.query(`INSERT INTO profile_versions ("workshopId", "profileId", "versionNo", "parentVersionId", parameters, rationale, "authorId", state, origin, "contentHash", "submittedAt", "decidedAt", justifications)
-      VALUES ($1, $2, $3, NULL, $4, $5, $6, $7, 'workshop', $8, now(), now(), $9) RETURNING id`,
-    [author.workshopId, profileId, next, JSON.stringify(parameters), content.rationale, author.id, state, hash, JSON.stringify({ 'stop-lamp': 'Stop lamps wired to the regen signal and checked.' })])).rows[0].id
-    if (state === 'approved') await c.query('INSERT INTO reviews ("workshopId", "versionId", "reviewerId", decision, comment) VALUES ($1, $2, $3, \'approve\', \'Fine\')', [author.workshopId, id, reviewer.id])
-    await c.query('COMMIT')
-    return id
-  })
+  const draft = (o.author ?? TUNER) === TUNER ? firstDrafts.get(profileId) : undefined
+  let id: number
+  if (draft) {
+    firstDrafts.delete(profileId)
+    const { lockVersion } = (await author.call('GET', `/api/versions/${draft}`)).body
+    const saved = await author.call('PATCH', `/api/versions/${draft}`, { lockVersion, parameters })
+    if (saved.status !== 200) throw new Error(`draft: ${saved.status} ${JSON.stringify(saved.body)}`)
+    id = draft
+  } else {
+    const created = await author.call('POST', `/api/profiles/${profileId}/versions`, { parameters, rationale: 'Test settings' })
+    if (created.status !== 201) throw new Error(`version: ${created.status} ${JSON.stringify(created.body)}`)
+    id = created.body.id
+  }
+  await submitAndApprove(author, o.state === 'in-review' ? null : await as(o.reviewer ?? 'engineer@voltwright.test'), id)
+  return id
 }
 
 export const passingChecks = () => [

@@ -25,7 +25,7 @@ describe('road tests', async () => {
     expect(read.body.conditions).toEqual({ surface: 'dry', ambientC: 14, route: 'Forge loop with Quarry Lane' })
     expect(read.body.vehicle.status).toBe('road-testing')
     const events = await withDatabase(c => c.query('SELECT action FROM audit_events WHERE "vehicleId" = $1 ORDER BY id', [car.id]))
-    expect(events.rows.map(r => r.action)).toEqual(['vehicle.created', 'vehicle.status-changed', 'road-test.recorded'])
+    expect(events.rows.map(r => r.action)).toEqual(['vehicle.created', 'profile.created', 'version.created', 'version.submitted', 'version.approved', 'vehicle.status-changed', 'road-test.recorded'])
     const list = await auditor.call('GET', `/api/vehicles/${car.id}/road-tests`)
     expect(list.body.items[0]).toMatchObject({ id: res.body.id, verdict: 'pass', signed: false, failedChecks: [] })
   })

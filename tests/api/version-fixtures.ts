@@ -1,6 +1,7 @@
 // Cars and profiles of their own for the version tests, so the demo data stays as seeded.
 import { createHash } from 'node:crypto'
 import { expect } from 'vitest'
+import { RULE_IDS } from '../../shared/compute/types'
 import { unique, type Caller } from './helpers'
 
 // A light rear-driven saloon on the Fenlow 45 (the vehicles test's car).
@@ -44,3 +45,13 @@ export function expectedContentHash(v: { profileId: number, versionNo: number, p
 }
 
 export const paths = (body: { data?: { fields?: { path: string }[] } }) => (body.data?.fields ?? []).map(f => f.path).sort()
+
+// Sends a version to review with every safety rule justified, and (unless told not to) has another engineer approve it.
+export async function submitAndApprove(author: Caller, reviewer: Caller | null, versionId: number) {
+  const justifications = Object.fromEntries(RULE_IDS.map(rule => [rule, 'Checked on this car by the workshop; see the road test.']))
+  const submitted = await author.call('POST', `/api/versions/${versionId}/submit`, { justifications })
+  expect(submitted.status, JSON.stringify(submitted.body)).toBe(200)
+  if (!reviewer) return
+  const approved = await reviewer.call('POST', `/api/versions/${versionId}/approve`, { comment: 'Fine' })
+  expect(approved.status, JSON.stringify(approved.body)).toBe(200)
+}
