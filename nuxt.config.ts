@@ -32,6 +32,8 @@ export default defineNuxtConfig({
     smtpHost: '127.0.0.1',
     smtpPort: 1025,
     mailFrom: 'Voltwright <register@voltwright.test>',
+    // A sign-in lasts a working day: after 12 hours the sealed cookie no longer opens.
+    session: { maxAge: 60 * 60 * 12 },
     public: { baseUrl: 'http://localhost:3000' }
   },
   nitro: {

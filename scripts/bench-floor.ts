@@ -12,11 +12,10 @@ const port = Number(process.env.FLOOR_PORT)
 const q = async <T = Record<string, unknown>>(sql: string, params: unknown[]) => (await pool.query(sql, params)).rows as T[]
 const settingsOf = (s: unknown): WorkshopSettings => { const p = workshopSettingsSchema.safeParse(s ?? {}); return p.success ? p.data : defaultSettings }
 
-// GET /api/vehicles: the page and the count, the drive unit and owner joined, as findAndCountAll asks.
+// GET /api/vehicles: the page and the count, the drive unit's key and name and the owner joined, as findAndCountAll asks.
 async function vehicles(workshopId: number) {
   const [count] = await q<{ n: string }>('SELECT count(v.id) AS n FROM vehicles v WHERE v."workshopId" = $1', [workshopId])
-  const rows = await q(`SELECT v.*, pl.id AS "platform.id", pl.key AS "platform.key", pl.name AS "platform.name", pl."motorMaxRpm" AS "platform.motorMaxRpm",
-      pl.schema AS "platform.schema", o.id AS "owner.id", o.name AS "owner.name"
+  const rows = await q(`SELECT v.*, pl.key AS "platform.key", pl.name AS "platform.name", o.id AS "owner.id", o.name AS "owner.name"
     FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" LEFT JOIN users o ON o.id = v."ownerUserId"
     WHERE v."workshopId" = $1 ORDER BY v."stockRef" ASC, v.id ASC LIMIT 20 OFFSET 0`, [workshopId])
   return { items: rows, total: Number(count!.n) }

@@ -11,7 +11,7 @@ export async function requireUser(event: H3Event): Promise<SignedIn> {
   const session = await getUserSession(event)
   const id = session.user?.id
   if (!id) throw createError({ statusCode: 401, message: 'Please sign in.' })
-  const user = await User.findByPk(id)
+  const user = await User.findByPk(id, { raw: true, attributes: ['id', 'workshopId', 'email', 'name', 'roles', 'active'] })
   if (!user || !user.active) {
     await clearUserSession(event)
     throw createError({ statusCode: 401, message: 'Please sign in.' })
@@ -38,11 +38,12 @@ export async function requireStaff(event: H3Event): Promise<SignedIn> {
 export const idParamSchema = z.object({ id: z.coerce.number().int().positive().max(2147483647) })
 
 // A car of the signed-in person's workshop; a car owner reaches only their own. Anything else is 404.
-export async function requireVehicle(event: H3Event, id: number): Promise<{ user: SignedIn, vehicle: Vehicle }> {
+// `withPlatform: false` skips loading the drive unit (and its schema) where the route does not need it.
+export async function requireVehicle(event: H3Event, id: number, { withPlatform = true } = {}): Promise<{ user: SignedIn, vehicle: Vehicle }> {
   const user = await requireUser(event)
   const where: Record<string, unknown> = { id, workshopId: user.workshopId }
   if (!isStaff(user.roles)) where.ownerUserId = user.id
-  const vehicle = await Vehicle.findOne({ where, include: ['platform'] })
+  const vehicle = await Vehicle.findOne({ where, include: withPlatform ? ['platform'] : [] })
   if (!vehicle) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
   return { user, vehicle }
 }

@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize'
 import type { HistoryEntry, HistoryPage, HistoryQuery } from '../../shared/schemas/history'
-import { changeRows, eventDetails, foldEvent, isPatch, type KnownState } from '../../shared/utils/audit-changes'
+import { changeRows, copyState, eventDetails, foldEvent, isPatch, type KnownState } from '../../shared/utils/audit-changes'
 
 export interface HistoryScope { workshopId: number, vehicleId?: number }
 
@@ -66,12 +66,15 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
        WHERE "workshopId" = :workshopId AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT :perEntity) x`,
     { replacements: { workshopId, tuples, perEntity: PER_ENTITY }, type: QueryTypes.SELECT })
   const wanted = new Set(needing.map(r => String(r.id)))
+  const priorOf = new Map<string, FoldRow[]>()
+  for (const e of earlier) priorOf.set(entityKey(e), [...(priorOf.get(entityKey(e)) ?? []), e])
   for (const [key, page] of onPage) {
-    const prior = earlier.filter(e => entityKey(e) === key).sort((a, b) => Number(BigInt(a.id) - BigInt(b.id)))
+    const prior = (priorOf.get(key) ?? []).sort((a, b) => Number(BigInt(a.id) - BigInt(b.id)))
+    // One working copy per entity, folded in place; a state is copied out only where a page event needs it.
     let state: KnownState = { known: false, state: undefined }
     for (const e of complete ? [...prior, ...page] : prior) {
-      if (wanted.has(String(e.id))) states.set(String(e.id), state)
-      state = foldEvent(state, e.data)
+      if (wanted.has(String(e.id))) states.set(String(e.id), copyState(state))
+      state = foldEvent(state, e.data, true)
     }
   }
   return states

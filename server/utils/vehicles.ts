@@ -9,14 +9,15 @@ export function vehicleView(v: Vehicle): VehicleView {
   return {
     id: v.id, stockRef: v.stockRef, make: v.make, model: v.model, year: v.year,
     chassisNumber: v.chassisNumber, registration: v.registration, status: v.status, spec: v.spec,
-    ownerUserId: v.ownerUserId, owner: v.owner ? { id: v.owner.id, name: v.owner.name } : null,
-    platform: v.platform ? { key: v.platform.key, name: v.platform.name } : null,
+    ownerUserId: v.ownerUserId, owner: v.owner?.id ? { id: v.owner.id, name: v.owner.name } : null,
+    platform: v.platform?.key ? { key: v.platform.key, name: v.platform.name } : null,
     driftedAt: v.driftedAt ?? null,
     createdAt: v.createdAt, updatedAt: v.updatedAt
   }
 }
 
 const include = [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
+const listInclude = [{ model: Platform, as: 'platform', attributes: ['key', 'name'] }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
 
 export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
   const where: WhereOptions<Vehicle> & Record<string | symbol, unknown> = { workshopId: user.workshopId }
@@ -26,11 +27,12 @@ export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
     const like = `%${q.q.replace(/[\\%_]/g, m => `\\${m}`)}%`
     where[Op.or] = ['make', 'model', 'stockRef', 'registration'].map(f => ({ [f]: { [Op.iLike]: like } }))
   }
+  // Plain rows, and of the drive unit only what the list shows (not its schema).
   const { rows, count } = await Vehicle.findAndCountAll({
-    where, include, order: [[q.sort, q.dir.toUpperCase()], ['id', 'ASC']],
-    limit: q.pageSize, offset: (q.page - 1) * q.pageSize
+    where, include: listInclude, order: [[q.sort, q.dir.toUpperCase()], ['id', 'ASC']],
+    limit: q.pageSize, offset: (q.page - 1) * q.pageSize, raw: true, nest: true
   })
-  return { items: rows.map(vehicleView), total: count }
+  return { items: (rows as unknown as Vehicle[]).map(vehicleView), total: count }
 }
 
 async function platformFor(key: string, workshopId: number) {

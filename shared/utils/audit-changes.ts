@@ -33,8 +33,9 @@ export function pointerGet(doc: unknown, path: string): { found: boolean, value?
 const clone = <T>(x: T): T => (x === undefined ? x : JSON.parse(JSON.stringify(x)))
 
 // Applies a patch without failing on paths the partial state does not hold (parents are created).
-export function applyPatchLenient(doc: unknown, patch: PatchOp[]): unknown {
-  let root: unknown = clone(doc) ?? {}
+// `inPlace` changes `doc` itself, for a fold that keeps only the states it copies out.
+export function applyPatchLenient(doc: unknown, patch: PatchOp[], inPlace = false): unknown {
+  let root: unknown = (inPlace ? doc : clone(doc)) ?? {}
   for (const op of patch) {
     if (op.op === 'test') continue
     const keys = decodePointer(op.path)
@@ -120,14 +121,17 @@ export function changeRows(data: Record<string, unknown>, fold?: KnownState): Ch
 }
 
 // The entity's state after this event, for the next one's "before".
-export function foldEvent(state: KnownState, data: Record<string, unknown>): KnownState {
-  if (isPatch(data.patch)) return { known: state.known, state: applyPatchLenient(state.state, data.patch) }
+// `inPlace` reuses the state given (the caller copies out any state it keeps).
+export function foldEvent(state: KnownState, data: Record<string, unknown>, inPlace = false): KnownState {
+  if (isPatch(data.patch)) return { known: state.known, state: applyPatchLenient(state.state, data.patch, inPlace) }
   if (isObject(data.after)) {
     if (!state.known || !isObject(state.state)) return { known: true, state: clone(data.after) }
-    return { known: true, state: applyPatchLenient(state.state, flattenLeaves(data.after).map(r => ({ op: 'add', path: r.path, value: r.value }))) }
+    return { known: true, state: applyPatchLenient(state.state, flattenLeaves(data.after).map(r => ({ op: 'add', path: r.path, value: r.value })), inPlace) }
   }
   return state
 }
+
+export const copyState = (s: KnownState): KnownState => ({ known: s.known, state: clone(s.state) })
 
 // What else the event recorded, beside the change itself.
 export function eventDetails(data: Record<string, unknown>): Record<string, unknown> {

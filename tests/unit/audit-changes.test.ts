@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest'
 import fc from 'fast-check'
 import jsonpatch from 'fast-json-patch'
-import { applyPatchLenient, changeRows, decodePointer, flattenLeaves, foldEvent, pointerGet, type PatchOp } from '../../shared/utils/audit-changes'
+import { applyPatchLenient, changeRows, copyState, decodePointer, flattenLeaves, foldEvent, pointerGet, type KnownState, type PatchOp } from '../../shared/utils/audit-changes'
 import { jsonPatch } from '../../shared/utils/json-patch'
 
 describe('what an audit event changed', () => {
@@ -45,6 +45,27 @@ describe('what an audit event changed', () => {
       { path: '/spec/kerbMassKg', op: 'replace', before: 1050, after: 1075, beforeKnown: true },
       { path: '/spec/kerbMassKg', op: 'replace', before: 1075, after: 1090, beforeKnown: true }
     ])
+  })
+
+  it('folds in place to the same states as folding copies, and leaves the events as they were', () => {
+    // Random successive snapshots of one entity, each event an RFC 6902 patch from the last (or a full snapshot).
+    const value = fc.dictionary(fc.constantFrom('powerCapKw', 'status', 'spec', 'a/b'), fc.oneof(fc.integer(), fc.string({ maxLength: 3 }), fc.dictionary(fc.constantFrom('x', 'y'), fc.integer())))
+    fc.assert(fc.property(fc.array(value, { minLength: 1, maxLength: 8 }), fc.boolean(), (snapshots, startWithSnapshot) => {
+      const events = snapshots.map((after, i) => i === 0 && startWithSnapshot ? { after } : { patch: jsonPatch(i ? snapshots[i - 1] : {}, after) as unknown })
+      const untouched = structuredClone(events)
+      let copying: KnownState = { known: false, state: undefined }
+      let inPlace: KnownState = { known: false, state: undefined }
+      const kept: KnownState[] = []
+      const expected: KnownState[] = []
+      for (const e of events) {
+        copying = foldEvent(copying, e)
+        inPlace = foldEvent(inPlace, e, true)
+        kept.push(copyState(inPlace))
+        expected.push(copying)
+      }
+      expect(kept).toEqual(expected) // a copy taken early is not changed by the folding after it
+      expect(events).toEqual(untouched)
+    }), { numRuns: 300 })
   })
 
   it('knows a value\'s last writer even without a snapshot to start from', () => {
