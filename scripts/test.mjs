@@ -58,7 +58,7 @@ try {
     VOLTWRIGHT_RESTARTED_DIR: restartedDir
   }
   await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api', ...apiFiles], { cwd: root, env: testEnv }) }, 'api')
-  await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
+  await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
   console.log('\n[voltwright test] all passed')
   await shutdown(0)
 } catch (e) {

@@ -1,9 +1,10 @@
 // A real Chromium (Debian's, driven by playwright-core) against the server `npm test` started.
-import { mkdtempSync, mkdirSync } from 'node:fs'
+import { mkdtempSync, mkdirSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
 import { createRequire } from 'node:module'
 import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import { syntheticDrive, telemetryCsv, type SyntheticCar, type SyntheticOptions } from '../../shared/telemetry/synthetic'
 
 export const baseUrl = process.env.VOLTWRIGHT_BASE_URL ?? 'http://localhost:3100'
 export const artifacts = resolve(import.meta.dirname, '..', 'artifacts')
@@ -38,4 +39,11 @@ export async function accessibilityProblems(page: Page): Promise<string[]> {
   await page.addScriptTag({ path: axePath })
   const result = await page.evaluate(() => (globalThis as any).axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa'] } }))
   return result.violations.filter((v: any) => v.impact === 'serious' || v.impact === 'critical').map((v: any) => `${v.id}: ${v.nodes.map((n: any) => n.target.join(' ')).slice(0, 3).join(', ')}`)
+}
+
+// A synthetic controller log of one drive, written to a file for the upload field.
+export function telemetryFile(name: string, car: SyntheticCar, options: SyntheticOptions = {}): string {
+  const file = join(mkdtempSync(join(tmpdir(), 'voltwright-log-')), name)
+  writeFileSync(file, telemetryCsv(syntheticDrive(car, options)))
+  return file
 }

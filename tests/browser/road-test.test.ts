@@ -1,20 +1,15 @@
-import { mkdtempSync, writeFileSync } from 'node:fs'
-import { tmpdir } from 'node:os'
-import { join } from 'node:path'
 import { describe, it, expect, afterAll } from 'vitest'
-import { launch, signInThroughPage, shot, accessibilityProblems, baseUrl } from './helpers'
+import { launch, signInThroughPage, shot, accessibilityProblems, baseUrl, telemetryFile } from './helpers'
 import { passTheRestAndSave, recordConditions, recordHillStart, recordLiftOff, signOff, uploadLog } from './steps'
 import { useRunningServer, signIn } from '../api/helpers'
 import { approvedVersion, newCar, newProfile } from '../api/road-test-fixtures'
-import { syntheticDrive, telemetryCsv } from '../../shared/telemetry/synthetic'
 
 describe('a tester road-tests a car on a phone and signs it off', async () => {
   await useRunningServer()
   const tuner = await signIn('tuner@voltwright.test')
   const car = await newCar(tuner, { model: 'Phone Test Saloon' })
   const versionId = await approvedVersion(await newProfile(car.id))
-  const log = join(mkdtempSync(join(tmpdir(), 'voltwright-log-')), 'forge-loop.csv')
-  writeFileSync(log, telemetryCsv(syntheticDrive({ massKg: 1200, rollingRadiusM: 0.296, finalDriveRatio: 7.5, powerCapKw: 80, torqueCapNm: 260, liftOffDecelMs2: 0.9, brakeRegenDecelMs2: 1.6, packVoltageV: 350, creepSpeedKph: 5 }, { rollbackM: 0.05 })))
+  const log = telemetryFile('forge-loop.csv', { massKg: 1200, rollingRadiusM: 0.296, finalDriveRatio: 7.5, powerCapKw: 80, torqueCapNm: 260, liftOffDecelMs2: 0.9, brakeRegenDecelMs2: 1.6, packVoltageV: 350, creepSpeedKph: 5 }, { rollbackM: 0.05 })
   const { context, page } = await launch(390)
   afterAll(() => context.close())
 

@@ -5,6 +5,13 @@ import type { Page } from 'playwright-core'
 export const versionState = (page: Page) => page.locator('[data-state]').first().getAttribute('data-state')
 export const warningRules = (page: Page) => page.locator('[data-panel="warnings"] [data-rule]').evaluateAll(els => els.map(e => e.getAttribute('data-rule')))
 
+// From any screen: the car list, searched by stock ref as a workshop with many cars would.
+export async function findCar(page: Page, stockRef: string) {
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Cars', exact: true }).click()
+  await page.getByLabel(/Search make/).fill(stockRef)
+  await expect.poll(() => page.getByRole('link', { name: stockRef, exact: true }).count()).toBe(1)
+}
+
 // On a version's page: save the edited draft, then wait for the sheet to say so.
 export async function saveDraft(page: Page) {
   await page.getByRole('button', { name: 'Save draft' }).click()
