@@ -37,8 +37,8 @@ async function history(workshopId: number, vehicleId: number) {
   for (const r of page) { const k = `${r.entityType}\u0000${r.entityId}`; if (oldest.has(k)) oldest.get(k)!.id = r.id }
   const tuples = [...oldest.values()]
   const earlier = tuples.length
-    ? await q(`SELECT x.id, x."entityType", x."entityId", x.data FROM (VALUES ${tuples.map((_, i) => `($${3 * i + 2}, $${3 * i + 3}, $${3 * i + 4})`).join(', ')}) AS q(et, ei, bound) CROSS JOIN LATERAL (
-        SELECT id, "entityType", "entityId", jsonb_build_object('patch', data->'patch', 'after', data->'after') AS data FROM audit_events
+    ? await q(`SELECT x.id, x.action, x."entityType", x."entityId", x.data FROM (VALUES ${tuples.map((_, i) => `($${3 * i + 2}, $${3 * i + 3}, $${3 * i + 4})`).join(', ')}) AS q(et, ei, bound) CROSS JOIN LATERAL (
+        SELECT id, action, "entityType", "entityId", CASE WHEN action = 'version.created' THEN data ELSE jsonb_build_object('patch', data->'patch', 'after', data->'after') END AS data FROM audit_events
         WHERE "workshopId" = $1 AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT 100) x`, [workshopId, ...tuples.flatMap(t => [t.et, t.ei, t.id])])
     : []
   return { items: page, earlier: earlier.length, nextCursor: rows.length > 50 ? page[49]!.id : null }

@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize'
 import type { HistoryEntry, HistoryPage, HistoryQuery } from '../../shared/schemas/history'
-import { changeRows, copyState, eventDetails, foldEvent, isPatch, type KnownState } from '../../shared/utils/audit-changes'
+import { changeRows, copyState, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../shared/utils/audit-changes'
 
 export interface HistoryScope { workshopId: number, vehicleId?: number }
 
@@ -43,7 +43,7 @@ const entityKey = (r: { entityType: string, entityId: string }) => `${r.entityTy
 // of them, read newest first in one query; a value last set further back shows as not recorded. When the page
 // holds every event of its range (no filters), only the events before the page are read.
 const PER_ENTITY = 100
-type FoldRow = Pick<EventRow, 'id' | 'entityType' | 'entityId' | 'data'>
+type FoldRow = Pick<EventRow, 'id' | 'action' | 'entityType' | 'entityId' | 'data'>
 const needsFold = (r: EventRow) => isPatch(r.data.patch) && r.data.patch.some(o => o.op !== 'test') && r.data.before === undefined
 
 async function foldedStates(workshopId: number, rows: EventRow[], complete: boolean): Promise<Map<string, KnownState>> {
@@ -61,8 +61,9 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
     return [list[0]!.entityType, list[0]!.entityId, String(bound)]
   })
   const earlier = await useDatabase().query<FoldRow>(
-    `SELECT x.id, x."entityType", x."entityId", x.data FROM (VALUES :tuples) AS q(et, ei, bound) CROSS JOIN LATERAL (
-       SELECT id, "entityType", "entityId", jsonb_build_object('patch', data->'patch', 'after', data->'after') AS data FROM audit_events
+    `SELECT x.id, x.action, x."entityType", x."entityId", x.data FROM (VALUES :tuples) AS q(et, ei, bound) CROSS JOIN LATERAL (
+       SELECT id, action, "entityType", "entityId", CASE WHEN action = 'version.created' THEN data ELSE jsonb_build_object('patch', data->'patch', 'after', data->'after') END AS data
+         FROM audit_events
        WHERE "workshopId" = :workshopId AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT :perEntity) x`,
     { replacements: { workshopId, tuples, perEntity: PER_ENTITY }, type: QueryTypes.SELECT })
   const wanted = new Set(needing.map(r => String(r.id)))
@@ -74,7 +75,7 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
     let state: KnownState = { known: false, state: undefined }
     for (const e of complete ? [...prior, ...page] : prior) {
       if (wanted.has(String(e.id))) states.set(String(e.id), copyState(state))
-      state = foldEvent(state, e.data, true)
+      state = foldEvent(state, foldSource(e.action, e.data), true)
     }
   }
   return states

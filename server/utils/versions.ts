@@ -31,7 +31,7 @@ async function insertVersion(t: Transaction, user: SignedIn, profile: Profile, v
     workshopId: user.workshopId, vehicleId, actorId: user.id, action: 'version.created', entityType: 'version', entityId: version.id,
     data: {
       profileId: profile.id, profileName: profile.name, versionNo: version.versionNo, parentVersionId: content.parentVersionId,
-      parentVersionNo: input.parent?.versionNo ?? null, origin: input.origin, contentHash, parameters: input.parameters,
+      parentVersionNo: input.parent?.versionNo ?? null, origin: input.origin, contentHash, parameters: input.parameters, rationale: input.rationale,
       patchFromParent: input.parent ? jsonPatch(input.parent.parameters, input.parameters) : null
     }
   })

@@ -121,6 +121,14 @@ export function changeRows(data: Record<string, unknown>, fold?: KnownState): Ch
 }
 
 // The entity's state after this event, for the next one's "before".
+// A version's creation records its settings (and, in events written since it did, its rationale) beside the
+// event's other facts rather than as `after`: as a fold source, that is the version's first state.
+export function foldSource(action: string, data: Record<string, unknown>): Record<string, unknown> {
+  if (action !== 'version.created' || data.after !== undefined || !isObject(data.parameters)) return data
+  if (Object.hasOwn(data, 'rationale')) return { after: { parameters: data.parameters, rationale: data.rationale } }
+  return { patch: [{ op: 'add', path: '/parameters', value: data.parameters }] }
+}
+
 // `inPlace` reuses the state given (the caller copies out any state it keeps).
 export function foldEvent(state: KnownState, data: Record<string, unknown>, inPlace = false): KnownState {
   if (isPatch(data.patch)) return { known: state.known, state: applyPatchLenient(state.state, data.patch, inPlace) }

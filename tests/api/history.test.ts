@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest'
 import { parse } from 'csv-parse/sync'
 import { useRunningServer, signIn, withDatabase, baseUrl } from './helpers'
 import { newCar, testSpec, userId } from './fixtures'
+import { newCar as newTuneCar, newProfile } from './version-fixtures'
 
 describe('a car\'s history', async () => {
   await useRunningServer()
@@ -107,5 +108,19 @@ describe('a car\'s history', async () => {
     const carFacets = await auditor.call('GET', `/api/audit/facets?vehicleId=${car.id}`)
     expect(carFacets.body).toEqual({ actions: ['vehicle.created', 'vehicle.updated'], actors: [{ id: await userId('tuner@voltwright.test'), name: 'Dev Carrow' }, { id: await userId('engineer@voltwright.test'), name: 'Maud Ellery' }] })
     expect((await otherAdmin.call('GET', `/api/audit/facets?vehicleId=${car.id}`)).status).toBe(404)
+  })
+
+  it('knows what a draft\'s first edit replaced, from the version\'s creation, on a whole page and a filtered one', async () => {
+    const tuneCar = await newTuneCar(tuner)
+    const draft = await newProfile(tuner, tuneCar.id, { rationale: 'First cut' })
+    const from = draft.parameters.powerCapKw
+    const edit = await tuner.call('PATCH', `/api/versions/${draft.id}`, { lockVersion: draft.lockVersion, parameters: { ...draft.parameters, powerCapKw: from - 5 }, rationale: 'Gentler for the first drive' })
+    expect(edit.status, JSON.stringify(edit.body)).toBe(200)
+    for (const query of ['', '?action=version.edited']) {
+      const res = await auditor.call('GET', `/api/vehicles/${tuneCar.id}/history${query}`)
+      const edited = res.body.items.find((e: any) => e.action === 'version.edited')
+      expect(edited.changes).toContainEqual({ path: '/parameters/powerCapKw', op: 'replace', before: from, after: from - 5, beforeKnown: true })
+      expect(edited.changes).toContainEqual({ path: '/rationale', op: 'replace', before: 'First cut', after: 'Gentler for the first drive', beforeKnown: true })
+    }
   })
 })

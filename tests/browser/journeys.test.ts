@@ -131,7 +131,7 @@ describe('a car from the tuner\'s first draft to the owner\'s handover sheet', a
     await step(tester, 'tester-signs-off')
   })
 
-  it('the auditor reads the car\'s history page, then verifies the history chain', async () => {
+  it('the auditor reads the car\'s history page and verifies the history chain from it', async () => {
     const auditor = await browser()
     await signInThroughPage(auditor, 'auditor@voltwright.test')
     await findCar(auditor, car.stockRef)
@@ -151,7 +151,6 @@ describe('a car from the tuner\'s first draft to the owner\'s handover sheet', a
     expect(await entries.filter({ hasText: 'version.rejected' }).textContent()).toContain(comment)
     expect(await entries.filter({ hasText: 'quarry-lane.csv' }).textContent()).toContain('road-test.telemetry-uploaded')
     await step(auditor, 'auditor-car-history')
-    await auditor.getByRole('link', { name: 'Bench' }).click()
     await verifyChain(auditor)
     expect(await auditor.getByText(/events checked in/).textContent()).toMatch(/^\d[\d,]* events checked in [\d.]+ s; every link and every hash holds\.$/)
     await step(auditor, 'auditor-chain-verified')

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest'
 import fc from 'fast-check'
 import jsonpatch from 'fast-json-patch'
-import { applyPatchLenient, changeRows, copyState, decodePointer, flattenLeaves, foldEvent, pointerGet, type KnownState, type PatchOp } from '../../shared/utils/audit-changes'
+import { applyPatchLenient, changeRows, copyState, foldSource, decodePointer, flattenLeaves, foldEvent, pointerGet, type KnownState, type PatchOp } from '../../shared/utils/audit-changes'
 import { jsonPatch } from '../../shared/utils/json-patch'
 
 describe('what an audit event changed', () => {
@@ -66,6 +66,15 @@ describe('what an audit event changed', () => {
       expect(kept).toEqual(expected) // a copy taken early is not changed by the folding after it
       expect(events).toEqual(untouched)
     }), { numRuns: 300 })
+  })
+
+  it('takes a version\'s creation as its first state: whole when it names the rationale, the settings alone when not', () => {
+    const whole = foldEvent({ known: false, state: undefined }, foldSource('version.created', { versionNo: 1, parameters: { powerCapKw: 40 }, rationale: 'First cut' }))
+    expect(whole).toEqual({ known: true, state: { parameters: { powerCapKw: 40 }, rationale: 'First cut' } })
+    const older = foldEvent({ known: false, state: undefined }, foldSource('version.created', { versionNo: 1, parameters: { powerCapKw: 40 } }))
+    expect(older).toEqual({ known: false, state: { parameters: { powerCapKw: 40 } } })
+    expect(changeRows({ patch: [{ op: 'replace', path: '/rationale', value: 'x' }] }, older)[0]).toMatchObject({ beforeKnown: false })
+    expect(foldSource('vehicle.updated', { parameters: { a: 1 } })).toEqual({ parameters: { a: 1 } })
   })
 
   it('knows a value\'s last writer even without a snapshot to start from', () => {
