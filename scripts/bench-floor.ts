@@ -12,13 +12,12 @@ const port = Number(process.env.FLOOR_PORT)
 const q = async <T = Record<string, unknown>>(sql: string, params: unknown[]) => (await pool.query(sql, params)).rows as T[]
 const settingsOf = (s: unknown): WorkshopSettings => { const p = workshopSettingsSchema.safeParse(s ?? {}); return p.success ? p.data : defaultSettings }
 
-// GET /api/vehicles: the page and the count, the drive unit's key and name and the owner joined, as findAndCountAll asks.
+// GET /api/vehicles: the page with its count, the drive unit's key and name and the owner joined, in one query.
 async function vehicles(workshopId: number) {
-  const [count] = await q<{ n: string }>('SELECT count(v.id) AS n FROM vehicles v WHERE v."workshopId" = $1', [workshopId])
-  const rows = await q(`SELECT v.*, pl.key AS "platform.key", pl.name AS "platform.name", o.id AS "owner.id", o.name AS "owner.name"
+  const rows = await q<{ total: string }>(`SELECT v.*, pl.key AS "platformKey", pl.name AS "platformName", o.name AS "ownerName", count(*) OVER () AS total
     FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" LEFT JOIN users o ON o.id = v."ownerUserId"
     WHERE v."workshopId" = $1 ORDER BY v."stockRef" ASC, v.id ASC LIMIT 20 OFFSET 0`, [workshopId])
-  return { items: rows, total: Number(count!.n) }
+  return { items: rows, total: Number(rows[0]?.total ?? 0) }
 }
 
 // GET /api/vehicles/:id/history?limit=50: the car, then the keyset page of events with actor and car joined.
@@ -39,7 +38,7 @@ async function history(workshopId: number, vehicleId: number) {
   const earlier = tuples.length
     ? await q(`SELECT x.id, x.action, x."entityType", x."entityId", x.data FROM (VALUES ${tuples.map((_, i) => `($${3 * i + 2}, $${3 * i + 3}, $${3 * i + 4})`).join(', ')}) AS q(et, ei, bound) CROSS JOIN LATERAL (
         SELECT id, action, "entityType", "entityId", CASE WHEN action = 'version.created' THEN data ELSE jsonb_build_object('patch', data->'patch', 'after', data->'after') END AS data FROM audit_events
-        WHERE "workshopId" = $1 AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT 100) x`, [workshopId, ...tuples.flatMap(t => [t.et, t.ei, t.id])])
+        WHERE "workshopId" = $1 AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT 100) x ORDER BY x.id`, [workshopId, ...tuples.flatMap(t => [t.et, t.ei, t.id])])
     : []
   return { items: page, earlier: earlier.length, nextCursor: rows.length > 50 ? page[49]!.id : null }
 }
@@ -60,12 +59,11 @@ async function diff(workshopId: number, a: number, b: number) {
   return { a: evaluate(ra.spec, platformOf(ra), ra.parameters, settings), b: evaluate(rb.spec, platformOf(rb), rb.parameters, settings), patch: jsonPatch(ra.parameters, rb.parameters) }
 }
 
-// POST /api/evaluate {vehicleId, platformKey, parameters}: the car, the drive unit, the workshop's settings.
+// POST /api/evaluate {vehicleId, platformKey, parameters}: the workshop's settings, the car and its drive unit in one query.
 async function evaluateCar(workshopId: number, body: { vehicleId: number, platformKey: string, parameters: Record<string, unknown> }) {
-  const [car] = await q<{ spec: never }>('SELECT v.*, pl.key FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" WHERE v.id = $1 AND v."workshopId" = $2', [body.vehicleId, workshopId])
-  const [platform] = await q<PlatformLike>('SELECT * FROM platforms WHERE key = $1 AND ("workshopId" IS NULL OR "workshopId" = $2) LIMIT 1', [body.platformKey, workshopId])
-  const [w] = await q<{ settings: unknown }>('SELECT settings FROM workshops WHERE id = $1', [workshopId])
-  return evaluate(car!.spec, platform!, body.parameters, settingsOf(w!.settings))
+  const [row] = await q<{ spec: never, key: string, name: string, motorMaxRpm: number, schema: unknown, settings: unknown }>(`SELECT w.settings, v.spec, pl.key, pl.name, pl."motorMaxRpm", pl.schema
+    FROM workshops w LEFT JOIN vehicles v ON v.id = $2 AND v."workshopId" = w.id LEFT JOIN platforms pl ON pl.id = v."platformId" WHERE w.id = $1`, [workshopId, body.vehicleId])
+  return evaluate(row!.spec, row!, body.parameters, settingsOf(row!.settings))
 }
 
 const readBody = async (req: IncomingMessage) => { const chunks: Buffer[] = []; for await (const c of req) chunks.push(c as Buffer); return JSON.parse(Buffer.concat(chunks).toString('utf8')) }

@@ -5,7 +5,7 @@ import type { VehicleSpec } from '../../shared/schemas/vehicle-spec'
 import { Workshop } from '../models'
 
 // A workshop's rule thresholds; settings that no longer parse fall back to the defaults rather than fail.
-export function settingsOf(workshop: Pick<Workshop, 'settings'> | null | undefined): WorkshopSettings {
+export function settingsOf(workshop: { settings?: unknown } | null | undefined): WorkshopSettings {
   const parsed = workshopSettingsSchema.safeParse(workshop?.settings ?? {})
   return parsed.success ? parsed.data : defaultSettings
 }

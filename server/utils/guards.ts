@@ -1,6 +1,7 @@
 import type { H3Event } from 'h3'
 import { z } from 'zod'
-import { User, Vehicle } from '../models'
+import { QueryTypes } from 'sequelize'
+import { Vehicle } from '../models'
 import { isStaff, type Role } from '../../shared/schemas/roles'
 
 export interface SignedIn { id: number, workshopId: number, email: string, name: string, roles: Role[] }
@@ -11,7 +12,9 @@ export async function requireUser(event: H3Event): Promise<SignedIn> {
   const session = await getUserSession(event)
   const id = session.user?.id
   if (!id) throw createError({ statusCode: 401, message: 'Please sign in.' })
-  const user = await User.findByPk(id, { raw: true, attributes: ['id', 'workshopId', 'email', 'name', 'roles', 'active'] })
+  // A plain query: this runs on every request.
+  const [user] = await useDatabase().query<SignedIn & { active: boolean }>(
+    'SELECT id, "workshopId", email, name, roles, active FROM users WHERE id = :id', { replacements: { id }, type: QueryTypes.SELECT })
   if (!user || !user.active) {
     await clearUserSession(event)
     throw createError({ statusCode: 401, message: 'Please sign in.' })
@@ -38,12 +41,21 @@ export async function requireStaff(event: H3Event): Promise<SignedIn> {
 export const idParamSchema = z.object({ id: z.coerce.number().int().positive().max(2147483647) })
 
 // A car of the signed-in person's workshop; a car owner reaches only their own. Anything else is 404.
-// `withPlatform: false` skips loading the drive unit (and its schema) where the route does not need it.
-export async function requireVehicle(event: H3Event, id: number, { withPlatform = true } = {}): Promise<{ user: SignedIn, vehicle: Vehicle }> {
+export async function requireVehicle(event: H3Event, id: number): Promise<{ user: SignedIn, vehicle: Vehicle }> {
   const user = await requireUser(event)
   const where: Record<string, unknown> = { id, workshopId: user.workshopId }
   if (!isStaff(user.roles)) where.ownerUserId = user.id
-  const vehicle = await Vehicle.findOne({ where, include: withPlatform ? ['platform'] : [] })
+  const vehicle = await Vehicle.findOne({ where, include: ['platform'] })
   if (!vehicle) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
   return { user, vehicle }
+}
+
+// The same scope where the route needs only to know the car may be read (one plain query, no model).
+export async function requireVehicleAccess(event: H3Event, id: number): Promise<SignedIn> {
+  const user = await requireUser(event)
+  const own = isStaff(user.roles) ? '' : ' AND "ownerUserId" = :userId'
+  const found = await useDatabase().query(`SELECT 1 FROM vehicles WHERE id = :id AND "workshopId" = :workshopId${own}`,
+    { replacements: { id, workshopId: user.workshopId, userId: user.id }, type: QueryTypes.SELECT })
+  if (!found.length) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
+  return user
 }

@@ -54,7 +54,9 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
   const onPage = new Map<string, EventRow[]>() // oldest first, per entity
   for (const r of [...rows].reverse()) {
     const key = entityKey(r)
-    if (keys.has(key)) onPage.set(key, [...(onPage.get(key) ?? []), r])
+    if (!keys.has(key)) continue
+    if (!onPage.has(key)) onPage.set(key, [])
+    onPage.get(key)!.push(r)
   }
   const tuples = [...onPage.values()].map((list) => {
     const bound = complete ? BigInt(list[0]!.id) : BigInt(list.filter(needsFold).at(-1)!.id) + BigInt(1)
@@ -64,13 +66,17 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
     `SELECT x.id, x.action, x."entityType", x."entityId", x.data FROM (VALUES :tuples) AS q(et, ei, bound) CROSS JOIN LATERAL (
        SELECT id, action, "entityType", "entityId", CASE WHEN action = 'version.created' THEN data ELSE jsonb_build_object('patch', data->'patch', 'after', data->'after') END AS data
          FROM audit_events
-       WHERE "workshopId" = :workshopId AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT :perEntity) x`,
+       WHERE "workshopId" = :workshopId AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT :perEntity) x ORDER BY x.id`,
     { replacements: { workshopId, tuples, perEntity: PER_ENTITY }, type: QueryTypes.SELECT })
   const wanted = new Set(needing.map(r => String(r.id)))
   const priorOf = new Map<string, FoldRow[]>()
-  for (const e of earlier) priorOf.set(entityKey(e), [...(priorOf.get(entityKey(e)) ?? []), e])
+  for (const e of earlier) {
+    const key = entityKey(e)
+    if (!priorOf.has(key)) priorOf.set(key, [])
+    priorOf.get(key)!.push(e)
+  }
   for (const [key, page] of onPage) {
-    const prior = (priorOf.get(key) ?? []).sort((a, b) => Number(BigInt(a.id) - BigInt(b.id)))
+    const prior = priorOf.get(key) ?? [] // oldest first
     // One working copy per entity, folded in place; a state is copied out only where a page event needs it.
     let state: KnownState = { known: false, state: undefined }
     for (const e of complete ? [...prior, ...page] : prior) {

@@ -1,4 +1,4 @@
-import { Op, type WhereOptions } from 'sequelize'
+import { Op, QueryTypes } from 'sequelize'
 import { Platform, User, Vehicle } from '../models'
 import type { SignedIn } from './guards'
 import { isStaff } from '../../shared/schemas/roles'
@@ -17,22 +17,37 @@ export function vehicleView(v: Vehicle): VehicleView {
 }
 
 const include = [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
-const listInclude = [{ model: Platform, as: 'platform', attributes: ['key', 'name'] }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
 
+// One plain query for the page and its count (the list is the busiest read): of the drive unit only what the
+// list shows, not its schema. Sort fields come from the schema's own list, so they are safe to name in SQL.
 export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
-  const where: WhereOptions<Vehicle> & Record<string | symbol, unknown> = { workshopId: user.workshopId }
-  if (!isStaff(user.roles)) where.ownerUserId = user.id
-  if (q.status) where.status = q.status
+  const where = ['v."workshopId" = :workshopId']
+  const replacements: Record<string, unknown> = { workshopId: user.workshopId, limit: q.pageSize, offset: (q.page - 1) * q.pageSize }
+  if (!isStaff(user.roles)) { where.push('v."ownerUserId" = :ownerId'); replacements.ownerId = user.id }
+  if (q.status) { where.push('v.status = :status'); replacements.status = q.status }
   if (q.q) {
-    const like = `%${q.q.replace(/[\\%_]/g, m => `\\${m}`)}%`
-    where[Op.or] = ['make', 'model', 'stockRef', 'registration'].map(f => ({ [f]: { [Op.iLike]: like } }))
+    where.push(`(${['make', 'model', '"stockRef"', 'registration'].map(f => `v.${f} ILIKE :like`).join(' OR ')})`)
+    replacements.like = `%${q.q.replace(/[\\%_]/g, m => `\\${m}`)}%`
   }
-  // Plain rows, and of the drive unit only what the list shows (not its schema).
-  const { rows, count } = await Vehicle.findAndCountAll({
-    where, include: listInclude, order: [[q.sort, q.dir.toUpperCase()], ['id', 'ASC']],
-    limit: q.pageSize, offset: (q.page - 1) * q.pageSize, raw: true, nest: true
-  })
-  return { items: (rows as unknown as Vehicle[]).map(vehicleView), total: count }
+  const rows = await useDatabase().query<ListRow>(
+    `SELECT v.*, pl.key AS "platformKey", pl.name AS "platformName", o.name AS "ownerName", count(*) OVER () AS total
+       FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" LEFT JOIN users o ON o.id = v."ownerUserId"
+      WHERE ${where.join(' AND ')} ORDER BY v."${q.sort}" ${q.dir === 'desc' ? 'DESC' : 'ASC'}, v.id ASC LIMIT :limit OFFSET :offset`,
+    { replacements, type: QueryTypes.SELECT })
+  const total = rows.length ? Number(rows[0]!.total) : q.page === 1 ? 0 : await countVehicles(where.join(' AND '), replacements)
+  const items = rows.map(r => vehicleView({
+    ...r, platform: r.platformKey ? { key: r.platformKey, name: r.platformName } : undefined,
+    owner: r.ownerUserId ? { id: r.ownerUserId, name: r.ownerName } : undefined
+  } as unknown as Vehicle))
+  return { items, total }
+}
+
+type ListRow = Vehicle & { platformKey: string | null, platformName: string, ownerName: string, total: string }
+
+// A page past the end still reports how many cars there are.
+async function countVehicles(where: string, replacements: Record<string, unknown>) {
+  const [row] = await useDatabase().query<{ n: string }>(`SELECT count(*) AS n FROM vehicles v WHERE ${where}`, { replacements, type: QueryTypes.SELECT })
+  return Number(row!.n)
 }
 
 async function platformFor(key: string, workshopId: number) {

@@ -30,7 +30,7 @@ export function pointerGet(doc: unknown, path: string): { found: boolean, value?
   return { found: true, value: at }
 }
 
-const clone = <T>(x: T): T => (x === undefined ? x : JSON.parse(JSON.stringify(x)))
+const clone = <T>(x: T): T => (x === null || typeof x !== 'object' ? x : JSON.parse(JSON.stringify(x)))
 
 // Applies a patch without failing on paths the partial state does not hold (parents are created).
 // `inPlace` changes `doc` itself, for a fold that keeps only the states it copies out.

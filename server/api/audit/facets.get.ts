@@ -4,7 +4,7 @@ import { facetsQuerySchema } from '../../../shared/schemas/history'
 export default defineEventHandler(async (event) => {
   const { vehicleId } = await getValidatedQuery(event, zodValidator(facetsQuerySchema))
   if (vehicleId) {
-    const { user } = await requireVehicle(event, vehicleId)
+    const user = await requireVehicleAccess(event, vehicleId)
     await requireStaff(event)
     return historyFacets({ workshopId: user.workshopId, vehicleId })
   }

@@ -4,7 +4,7 @@ import { historyQuerySchema } from '../../../../shared/schemas/history'
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
   const query = await getValidatedQuery(event, zodValidator(historyQuerySchema))
-  const { user } = await requireVehicle(event, id, { withPlatform: false })
+  const user = await requireVehicleAccess(event, id)
   await requireStaff(event)
   return readHistory({ workshopId: user.workshopId, vehicleId: id }, query)
 })
