@@ -32,13 +32,19 @@ async function expectOk(url, init) {
 const ms = (x) => x === null ? '–' : `${x.toFixed(1)} ms`
 const rps = (x) => Math.round(x).toLocaleString('en-GB')
 
+const yes = (ok) => ok ? 'met' : '**not met**'
+
 function report(rows, load) {
-  let metCount = 0
+  let latencyMet = 0
+  let ratioMet = 0
   const lines = rows.map(({ name, product: p, floor: f }) => {
     const ratio = p.reqPerSec / f.reqPerSec
-    const met = p.p95 < P95_AIM_MS && ratio >= RATIO_AIM && p.non2xx === 0 && p.errors === 0
-    if (met) metCount++
-    return `| ${name} | ${rps(p.reqPerSec)} | ${ms(p.p50)} | ${ms(p.p95)} | ${ms(p.p99)} | ${p.non2xx} | ${rps(f.reqPerSec)} | ${ms(f.p50)} | ${ms(f.p95)} | ${ms(f.p99)} | ${f.non2xx} | ${(ratio * 100).toFixed(0)} % | ${met ? 'met' : '**not met**'} |`
+    const clean = p.non2xx === 0 && p.errors === 0
+    const fast = clean && p.p95 < P95_AIM_MS
+    const close = clean && ratio >= RATIO_AIM
+    latencyMet += fast ? 1 : 0
+    ratioMet += close ? 1 : 0
+    return `| ${name} | ${rps(p.reqPerSec)} | ${ms(p.p50)} | ${ms(p.p95)} | ${ms(p.p99)} | ${p.non2xx} | ${rps(f.reqPerSec)} | ${ms(f.p50)} | ${ms(f.p95)} | ${ms(f.p99)} | ${f.non2xx} | ${(ratio * 100).toFixed(0)} % | ${yes(fast)} | ${yes(close)} |`
   })
   return `# Voltwright under load
 
@@ -54,11 +60,11 @@ its user lookup, zod, the ajv schema check and the fuller answers.
 
 Aim: p95 under ${P95_AIM_MS} ms on each route and at least ${RATIO_AIM * 100} % of the floor's throughput.
 
-| Route | Product req/s | p50 | p95 | p99 | non-2xx | Floor req/s | p50 | p95 | p99 | non-2xx | Product / floor | Aim |
-|---|---|---|---|---|---|---|---|---|---|---|---|---|
+| Route | Product req/s | p50 | p95 | p99 | non-2xx | Floor req/s | p50 | p95 | p99 | non-2xx | Product / floor | p95 under ${P95_AIM_MS} ms | ${RATIO_AIM * 100} % of the floor |
+|---|---|---|---|---|---|---|---|---|---|---|---|---|---|
 ${lines.join('\n')}
 
-The aim is met on ${metCount} of ${rows.length} routes. With ${CONNECTIONS} connections always busy, a p95 under ${P95_AIM_MS} ms needs
+The p95 aim is met on ${latencyMet} of ${rows.length} routes, the throughput aim on ${ratioMet} of ${rows.length}. With ${CONNECTIONS} connections always busy, a p95 under ${P95_AIM_MS} ms needs
 roughly ${CONNECTIONS} / ${P95_AIM_MS / 1000} s = ${Math.round(CONNECTIONS / (P95_AIM_MS / 1000))} req/s (Little's law); the floor's own throughput shows what this machine
 allowed at the time, so where even the floor misses the latency aim the ratio is the meaningful figure.
 
