@@ -44,8 +44,9 @@ export async function updateWorkshopSettings(admin: SignedIn, change: Json): Pro
     const after = parsed.data
     const patch = jsonPatch(before, after)
     await w.update({ settings: after }, { transaction })
+    // The settings before, beside the patch: the workshop has no creation event for the history to fold from.
     if (patch.length) {
-      await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'workshop.settings-changed', entityType: 'workshop', entityId: w.id, data: { patch } })
+      await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'workshop.settings-changed', entityType: 'workshop', entityId: w.id, data: { patch, before } })
     }
     return { id: w.id, name: w.name, settings: after }
   })

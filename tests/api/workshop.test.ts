@@ -38,6 +38,14 @@ describe('workshop settings', async () => {
         { op: 'replace', path: '/friction/wet', value: 0.42 },
         { op: 'replace', path: '/units/speed', value: 'mph' }
       ]))
+      expect(events.rows[0].data.before).toEqual(original)
+      // The workshop's history shows each change as before → after, even for its first settings change.
+      const history = await admin.call('GET', '/api/audit/events?action=workshop.settings-changed&limit=1')
+      expect(history.body.items[0].actor.name).toBe('Imogen Rook')
+      expect(history.body.items[0].changes).toEqual(expect.arrayContaining([
+        { path: '/friction/wet', op: 'replace', before: original.friction.wet, after: 0.42, beforeKnown: true },
+        { path: '/units/speed', op: 'replace', before: original.units.speed, after: 'mph', beforeKnown: true }
+      ]))
       const evaluated = await tuner.call('POST', '/api/evaluate', { spec, platformKey: 'fenlow-45', parameters: defaultParameters(fenlow45) })
       // Rear-axle-only braking limit a = μ·g·s_r/(1 + μ·h/L) (Gillespie ch. 2, REFERENCES.md) with the new μ
       expect(evaluated.body.figures.regenGripLimitMs2.wet).toBeCloseTo(0.42 * STANDARD_GRAVITY * 0.53 / (1 + 0.42 * 0.47 / 2.235), 6)
@@ -52,6 +60,16 @@ describe('workshop settings', async () => {
     const range = await admin.call('PATCH', '/api/workshop/settings', { friction: { snow: 0.01 }, minStartGradePct: -5 })
     expect(range.status).toBe(400)
     expect(range.body.data.fields.map((f: { path: string }) => f.path).sort()).toEqual(['friction.snow', 'minStartGradePct'])
+    // Each message names the setting and its range, as the admin's form shows it beside the field.
+    expect(range.body.data.fields).toEqual(expect.arrayContaining([
+      { path: 'friction.snow', message: 'Snow friction must be from 0.05 to 0.5' },
+      { path: 'minStartGradePct', message: 'Minimum hill-start gradient must be from 0 to 60 %' }
+    ]))
+    const share = await admin.call('PATCH', '/api/workshop/settings', { tyreLoadCautionFraction: 1, regenGripCautionFraction: null })
+    expect(share.body.data.fields).toEqual(expect.arrayContaining([
+      { path: 'tyreLoadCautionFraction', message: 'Tyre load caution share must be above 0 % and below 100 % (a fraction between 0 and 1)' },
+      { path: 'regenGripCautionFraction', message: 'Regen grip caution share needs a number' }
+    ]))
     const order = await admin.call('PATCH', '/api/workshop/settings', { friction: { dry: 0.4, wet: 0.6 } })
     expect(order.status).toBe(400)
     expect(order.body.data.fields[0].path).toBe('friction')
