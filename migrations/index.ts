@@ -5,6 +5,7 @@ import * as profilesAndReviews from './20261201-0003-profiles-and-reviews'
 import * as roadTestsAndSnags from './20261201-0004-road-tests-and-snags'
 import * as roadTestFiles from './20261201-0006-road-test-files'
 import * as history from './20261201-0007-history'
+import * as revokedSessions from './20261202-0008-revoked-sessions'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -12,5 +13,6 @@ export const migrations = [
   { name: '20261201-0003-profiles-and-reviews', ...profilesAndReviews },
   { name: '20261201-0004-road-tests-and-snags', ...roadTestsAndSnags },
   { name: '20261201-0006-road-test-files', ...roadTestFiles },
-  { name: '20261201-0007-history', ...history }
+  { name: '20261201-0007-history', ...history },
+  { name: '20261202-0008-revoked-sessions', ...revokedSessions }
 ]

@@ -5,6 +5,7 @@ import { User } from './user'
 import { Platform } from './platform'
 import { Vehicle } from './vehicle'
 import { LoginAttempt } from './login-attempt'
+import { RevokedSession } from './revoked-session'
 import { Profile } from './profile'
 import { ProfileVersion } from './profile-version'
 import { Review } from './review'
@@ -15,9 +16,9 @@ import { Attachment } from './attachment'
 import { TelemetryLog } from './telemetry-log'
 import { Readback } from './readback'
 
-export { Workshop, User, Platform, Vehicle, LoginAttempt, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback }
+export { Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback }
 
-const all = [Workshop, User, Platform, Vehicle, LoginAttempt, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback]
+const all = [Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback]
 
 export function initModels(sequelize: Sequelize) {
   for (const model of all) model.initModel(sequelize)

@@ -6,16 +6,18 @@ import { isStaff, type Role } from '../../shared/schemas/roles'
 
 export interface SignedIn { id: number, workshopId: number, email: string, name: string, roles: Role[] }
 
-// The session says who signed in; the database says whether they still may (deactivation takes effect at once).
+// The session says who signed in; the database says whether they still may: deactivation and signing out
+// take effect at once, for every copy of the cookie.
 export async function requireUser(event: H3Event): Promise<SignedIn> {
   if (event.context.signedIn) return event.context.signedIn as SignedIn
   const session = await getUserSession(event)
   const id = session.user?.id
   if (!id) throw createError({ statusCode: 401, message: 'Please sign in.' })
-  // A plain query: this runs on every request.
-  const [user] = await useDatabase().query<SignedIn & { active: boolean }>(
-    'SELECT id, "workshopId", email, name, roles, active FROM users WHERE id = :id', { replacements: { id }, type: QueryTypes.SELECT })
-  if (!user || !user.active) {
+  // One plain query: this runs on every request.
+  const [user] = await useDatabase().query<SignedIn & { active: boolean, revoked: boolean }>(
+    `SELECT id, "workshopId", email, name, roles, active, EXISTS (SELECT 1 FROM revoked_sessions WHERE "sessionId" = :sessionId) AS revoked
+       FROM users WHERE id = :id`, { replacements: { id, sessionId: session.id ?? '' }, type: QueryTypes.SELECT })
+  if (!user || !user.active || user.revoked) {
     await clearUserSession(event)
     throw createError({ statusCode: 401, message: 'Please sign in.' })
   }

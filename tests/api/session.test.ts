@@ -1,9 +1,9 @@
 // The sealed session cookie as the server opens it (and keeps it opened, per instance): only a cookie sealed
 // with the server's password opens, a sign-in older than 12 hours is refused, and a deactivated person is
-// refused at once even though their cookie was opened before.
+// refused at once even though their cookie was opened before; signing out refuses every copy of the cookie.
 import { describe, it, expect } from 'vitest'
 import { seal, defaults } from 'iron-webcrypto'
-import { useRunningServer, signIn, anonymous, unique, type Caller } from './helpers'
+import { useRunningServer, signIn, anonymous, unique, withDatabase, type Caller } from './helpers'
 
 const HOUR = 3600_000
 const password = process.env.NUXT_SESSION_PASSWORD ?? ''
@@ -53,5 +53,18 @@ describe('the session cookie', async () => {
     expect((await leaver.call('GET', '/api/auth/me')).status).toBe(200)
     expect((await admin.call('PATCH', `/api/users/${made.body.id}`, { active: false })).status).toBe(200)
     expect((await leaver.call('GET', '/api/auth/me')).status).toBe(401)
+  })
+
+  it('refuses a copy of the cookie once its session has signed out, and only that session', async () => {
+    const kept = await signIn('tester@voltwright.test')
+    const other = await signIn('tester@voltwright.test')
+    expect((await kept.call('GET', '/api/auth/me')).status).toBe(200)
+    expect((await kept.call('POST', '/api/auth/logout')).status).toBe(200)
+    expect((await kept.call('GET', '/api/auth/me')).status).toBe(401) // the copy kept from before signing out
+    const pageSession = await kept.call('GET', '/api/_auth/session')
+    expect(pageSession.status).toBe(401)
+    expect((await other.call('GET', '/api/auth/me')).status).toBe(200) // another sign-in of the same person
+    const row = await withDatabase(c => c.query('SELECT "expiresAt" FROM revoked_sessions WHERE "userId" = (SELECT id FROM users WHERE email = $1)', ['tester@voltwright.test']))
+    expect(row.rows.length).toBeGreaterThanOrEqual(1)
   })
 })

@@ -107,9 +107,13 @@ describe('an admin sets the workshop\'s safety thresholds', async () => {
       expect(await tuner.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Safety thresholds' }).count()).toBe(0)
       const res = await tuner.page.goto(`${baseUrl}/admin/workshop`, { waitUntil: 'networkidle' })
       expect(res?.status()).toBe(403)
-      expect(await tuner.page.locator('body').textContent()).toContain('This screen is not part of your role.')
+      expect(await tuner.page.getByRole('heading', { level: 1 }).textContent()).toBe('Not part of your role')
+      expect(await tuner.page.getByRole('navigation', { name: 'Main' }).count()).toBe(1) // in the product's own frame, with a way back
+      expect(await accessibilityProblems(tuner.page)).toEqual([])
       expect(await tuner.page.getByRole('button', { name: 'Save the thresholds' }).count()).toBe(0)
       await shot(tuner.page, 'workshop-settings-04-tuner-refused')
+      await tuner.page.getByRole('button', { name: 'Back to the bench' }).click()
+      await tuner.page.waitForURL(u => u.pathname === '/')
       expect((await tuner.page.request.patch(`${baseUrl}/api/workshop/settings`, { data: { friction: { snow: 0.1 } } })).status()).toBe(403)
     } finally { await tuner.context.close() }
   })
