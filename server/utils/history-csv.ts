@@ -8,7 +8,7 @@ import { csvLine } from './csv'
 const COLUMNS = ['event', 'time (UTC)', 'car', 'action', 'what happened', 'entity', 'by', 'changes (before → after)', 'details', 'previous hash', 'hash']
 
 export function entryCells(e: HistoryEntry): string[] {
-  const changes = e.changes.map(c => `${changePathLabel(c.path)}: ${c.beforeKnown ? changeValueText(c.before) : '(not recorded)'} → ${changeValueText(c.after)}`).join('; ')
+  const changes = e.changes.map(c => `${changePathLabel(c.path, e.entityType)}: ${c.beforeKnown ? changeValueText(c.before) : '(not recorded)'} → ${changeValueText(c.after)}`).join('; ')
   return [e.id, e.createdAt, e.vehicle?.stockRef ?? '', e.action, auditActionLabel(e.action), `${e.entityType} ${e.entityId}`,
     e.actor?.name ?? 'Voltwright', changes, Object.keys(e.details).length ? JSON.stringify(e.details) : '', e.prevHash ?? '', e.hash]
 }

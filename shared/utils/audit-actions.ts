@@ -1,3 +1,5 @@
+import { knownChangeLabel } from './change-labels'
+
 // Plain words for the actions the history records; an action not listed here is shown as written.
 export const auditActionLabels: Record<string, string> = {
   'vehicle.created': 'Car booked in',
@@ -33,9 +35,10 @@ export function auditActionLabel(action: string): string {
   return auditActionLabels[action] ?? action
 }
 
-// Parameter and field names as the history shows them ("/spec/kerbMassKg" → "spec › kerbMassKg").
-export function changePathLabel(path: string): string {
-  return path.replace(/^\//, '').split('/').map(s => s.replace(/~1/g, '/').replace(/~0/g, '~')).join(' › ') || '(whole record)'
+// Field names as the history shows them: the workshop's words where the field has them (by the kind of
+// record changed), else the path's own names ("/spec/newThing" → "spec › newThing").
+export function changePathLabel(path: string, entityType?: string): string {
+  return knownChangeLabel(entityType, path) ?? (path.replace(/^\//, '').split('/').map(s => s.replace(/~1/g, '/').replace(/~0/g, '~')).join(' › ') || '(whole record)')
 }
 
 export function changeValueText(value: unknown): string {

@@ -53,7 +53,7 @@ describe('an admin sets the workshop\'s safety thresholds', async () => {
     await page.getByRole('link', { name: 'Activity', exact: true }).last().click()
     const event = page.locator('li', { hasText: 'Workshop settings changed' }).first()
     await expect.poll(() => event.textContent()).toContain('Juno Hatherley')
-    expect(await event.locator('tr', { hasText: 'friction › snow' }).textContent()).toMatch(/0\.2\s*→\s*0\.15/)
+    expect(await event.locator('tr', { hasText: 'Snow friction' }).textContent()).toMatch(/0\.2\s*→\s*0\.15/)
     expect(await event.locator('tr', { hasText: 'minCreepHoldGradePct' }).textContent()).toMatch(/5\s*→\s*8/)
   })
 

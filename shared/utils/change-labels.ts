@@ -1,0 +1,31 @@
+// The fields a history change names, in the workshop's words: "/spec/kerbMassKg" on a car is
+// "Kerb mass (converted), kg". Paths with no words of their own keep their names, joined by ›.
+import { schemaProperties } from '../compute/parameter-input'
+import { settingLimits } from '../compute/settings'
+import { platforms } from '../platforms'
+import { specGroups } from '../schemas/vehicle-spec-fields'
+
+const withUnit = (label: string, unit?: string) => (unit && !/^[:0×]/.test(unit) ? `${label}, ${unit}` : label)
+
+const carLabels: Record<string, string> = {
+  '/stockRef': 'Stock ref', '/make': 'Make', '/model': 'Model', '/year': 'Year', '/chassisNumber': 'Chassis number',
+  '/registration': 'Registration', '/status': 'Stage', '/ownerUserId': 'Owner (person no.)', '/platformKey': 'Drive unit',
+  '/driftedAt': 'Drift found at',
+  ...Object.fromEntries(specGroups.flatMap(g => g.fields).map(f => [`/spec/${f.key}`, withUnit(f.label, f.unit)]))
+}
+
+// Voltwright's own drive units share their settings' titles; a workshop's own unit may add others.
+const parameterTitles = Object.fromEntries(platforms.flatMap(p => Object.entries(schemaProperties(p.schema)))
+  .map(([name, prop]) => [`/parameters/${name}`, withUnit(String(prop.title ?? name), typeof prop.unit === 'string' ? prop.unit : undefined)]))
+const versionLabels: Record<string, string> = { ...parameterTitles, '/rationale': 'Rationale', '/parameters': 'Settings' }
+
+const settingLabels: Record<string, string> = {
+  ...Object.fromEntries(Object.entries(settingLimits).map(([path, l]) => [`/${path.replace('.', '/')}`, l.name])),
+  '/units/power': 'Power shown as', '/units/speed': 'Speed shown as'
+}
+
+const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels }
+
+export function knownChangeLabel(entityType: string | undefined, path: string): string | undefined {
+  return entityType ? byEntity[entityType]?.[path] : undefined
+}

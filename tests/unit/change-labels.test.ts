@@ -1,0 +1,22 @@
+import { describe, it, expect } from 'vitest'
+import { changePathLabel } from '../../shared/utils/audit-actions'
+
+// The labels come from the product's own field lists (spec sheet, drive-unit schemas, settings); what is
+// checked here is that each kind of record finds its own words, and that anything else keeps its path.
+describe('history field labels', () => {
+  it('names a car\'s, a version\'s and the workshop\'s fields in words', () => {
+    expect(changePathLabel('/spec/kerbMassKg', 'vehicle')).toBe('Kerb mass (converted), kg')
+    expect(changePathLabel('/status', 'vehicle')).toBe('Stage')
+    expect(changePathLabel('/parameters/powerCapKw', 'version')).toBe('Power cap, kW')
+    expect(changePathLabel('/rationale', 'version')).toBe('Rationale')
+    expect(changePathLabel('/friction/snow', 'workshop')).toBe('Snow friction')
+    expect(changePathLabel('/units/speed', 'workshop')).toBe('Speed shown as')
+  })
+
+  it('keeps the path where a record has no words for it, or the kind of record is not known', () => {
+    expect(changePathLabel('/status', 'snag')).toBe('status')
+    expect(changePathLabel('/spec/newThing', 'vehicle')).toBe('spec › newThing')
+    expect(changePathLabel('/a~1b/c~0d')).toBe('a/b › c~d') // RFC 6901 escapes
+    expect(changePathLabel('')).toBe('(whole record)')
+  })
+})
