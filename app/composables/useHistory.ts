@@ -46,11 +46,12 @@ export function useHistoryFacets(vehicleId: MaybeRefOrGetter<number | undefined>
 
 // Every matching event for the print view, read page by page (up to `max`; the CSV export has no limit).
 export function useFullHistory(vehicleId: number, filters: HistoryFilters, max = 5000) {
+  const request = useRequestFetch() // on the server, passes the person's cookie on to the API
   return useAsyncData(`history-print:${vehicleId}:${JSON.stringify(filters)}`, async () => {
     const items: HistoryEntry[] = []
     let cursor: string | null = null
     do {
-      const page: HistoryPage = await $fetch<HistoryPage>(endpoint(vehicleId), { query: { ...historyQuery(filters), limit: 200, ...(cursor ? { cursor } : {}) } })
+      const page: HistoryPage = await request<HistoryPage>(endpoint(vehicleId), { query: { ...historyQuery(filters), limit: 200, ...(cursor ? { cursor } : {}) } })
       items.push(...page.items)
       cursor = page.nextCursor
     } while (cursor && items.length < max)

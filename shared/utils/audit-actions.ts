@@ -52,17 +52,28 @@ export function changeValueText(value: unknown): string {
 const detailLabels: Record<string, string> = {
   source: 'Came in as', matches: 'Matches the car\'s profile', profile: 'Profile', versionNo: 'Version', readAt: 'Read from the controller at',
   controller: 'Controller', differences: 'Differences', reason: 'Reason', verdict: 'Verdict', roadTestId: 'Road test no.', versionId: 'Version id',
-  profileId: 'Profile id', passwordChanged: 'Password changed'
+  profileId: 'Profile id', passwordChanged: 'Password changed', comment: 'Comment', reviewId: 'Review no.', contentHash: 'Content hash',
+  warnings: 'Warnings', dangerCount: 'Danger warnings', justifications: 'Justifications', parameters: 'Settings', rationale: 'Rationale',
+  profileName: 'Profile', parentVersionId: 'Drafted from version id', parentVersionNo: 'Drafted from version', patchFromParent: 'Changed from that version',
+  origin: 'Made', name: 'Name', make: 'Make', model: 'Model', status: 'Stage', stockRef: 'Stock ref', lockVersion: 'Save no.',
+  supersededVersionId: 'Replaced version id', fileName: 'File', sizeBytes: 'Size (bytes)', sha256: 'SHA-256'
 }
 
 export function detailLabel(key: string): string {
   return detailLabels[key] ?? key
 }
 
+const isWarning = (x: unknown): x is { rule: string, severity: string } => typeof x === 'object' && x !== null && typeof (x as { rule?: unknown }).rule === 'string'
+const isPatchOp = (x: unknown): x is { op: string, path: string, value?: unknown } => typeof x === 'object' && x !== null && typeof (x as { op?: unknown }).op === 'string' && typeof (x as { path?: unknown }).path === 'string'
+
 // A detail as words: read-back differences as "parameter: signed off → found", yes/no for true/false.
 export function detailText(key: string, value: unknown): string {
   if (key === 'differences' && Array.isArray(value)) {
     return value.map((d: { parameter?: string, expected?: unknown, found?: unknown }) => `${d.parameter}: ${changeValueText(d.expected ?? null)} signed off → ${changeValueText(d.found ?? null)} found`).join('; ') || 'none'
+  }
+  if (Array.isArray(value) && value.length && value.every(isWarning)) return value.map(w => `${w.rule} (${w.severity})`).join(', ')
+  if (Array.isArray(value) && value.length && value.every(isPatchOp)) {
+    return value.map(o => o.op === 'remove' ? `${changePathLabel(o.path)} removed` : `${changePathLabel(o.path)} → ${changeValueText(o.value)}`).join(', ')
   }
   if (typeof value === 'boolean') return value ? 'yes' : 'no'
   if (value && typeof value === 'object' && !Array.isArray(value)) {

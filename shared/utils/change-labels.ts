@@ -24,7 +24,11 @@ const settingLabels: Record<string, string> = {
   '/units/power': 'Power shown as', '/units/speed': 'Speed shown as'
 }
 
-const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels }
+const snagLabels: Record<string, string> = {
+  '/kind': 'Kind', '/title': 'Snag', '/detail': 'Detail', '/status': 'Status', '/blocking': 'Blocks sign-off', '/priority': 'Priority', '/assigneeId': 'Assigned to (person no.)'
+}
+
+const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels, snag: snagLabels }
 
 export function knownChangeLabel(entityType: string | undefined, path: string): string | undefined {
   return entityType ? byEntity[entityType]?.[path] : undefined

@@ -39,6 +39,11 @@ describe('the history, as an auditor and as a car owner sees it', async () => {
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toContain('History of OF-101')
     expect(await accessibilityProblems(page)).toEqual([])
     await shot(page, 'history-03-print-view')
+    // Opened afresh (a reload, a bookmark, printing from a link): the server renders it with the person's session.
+    const events = await page.getByRole('main').locator('ol > li').count()
+    expect(events).toBeGreaterThan(0)
+    await page.reload({ waitUntil: 'networkidle' })
+    await expect.poll(() => page.getByRole('main').locator('ol > li').count()).toBe(events)
   })
 
   it('a car owner sees their own car in plain words, and not another\'s', async () => {
