@@ -54,7 +54,7 @@ describe('an admin sets the workshop\'s safety thresholds', async () => {
     const event = page.locator('li', { hasText: 'Workshop settings changed' }).first()
     await expect.poll(() => event.textContent()).toContain('Juno Hatherley')
     expect(await event.locator('tr', { hasText: 'Snow friction' }).textContent()).toMatch(/0\.2\s*→\s*0\.15/)
-    expect(await event.locator('tr', { hasText: 'minCreepHoldGradePct' }).textContent()).toMatch(/5\s*→\s*8/)
+    expect(await event.locator('tr', { hasText: 'Minimum creep-hold gradient' }).textContent()).toMatch(/5\s*→\s*8/)
   })
 
   it('refuses out-of-range values by name, and shows the server\'s word when another admin saved meanwhile', async () => {
