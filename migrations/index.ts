@@ -6,6 +6,7 @@ import * as roadTestsAndSnags from './20261201-0004-road-tests-and-snags'
 import * as roadTestFiles from './20261201-0006-road-test-files'
 import * as history from './20261201-0007-history'
 import * as revokedSessions from './20261202-0008-revoked-sessions'
+import * as platformKeys from './20261202-0009-platform-keys-per-workshop'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -14,5 +15,6 @@ export const migrations = [
   { name: '20261201-0004-road-tests-and-snags', ...roadTestsAndSnags },
   { name: '20261201-0006-road-test-files', ...roadTestFiles },
   { name: '20261201-0007-history', ...history },
-  { name: '20261202-0008-revoked-sessions', ...revokedSessions }
+  { name: '20261202-0008-revoked-sessions', ...revokedSessions },
+  { name: '20261202-0009-platform-keys-per-workshop', ...platformKeys }
 ]

@@ -1,4 +1,4 @@
-import { Op, QueryTypes } from 'sequelize'
+import { QueryTypes } from 'sequelize'
 import { Platform, User, Vehicle } from '../models'
 import type { SignedIn } from './guards'
 import { isStaff } from '../../shared/schemas/roles'
@@ -51,7 +51,7 @@ async function countVehicles(where: string, replacements: Record<string, unknown
 }
 
 async function platformFor(key: string, workshopId: number) {
-  const platform = await Platform.findOne({ where: { key, [Op.or]: [{ workshopId: null }, { workshopId }] } })
+  const platform = await findWorkshopPlatform(key, workshopId)
   if (!platform) throw createError({ statusCode: 400, message: `Unknown drive unit "${key}".`, data: { fields: [{ path: 'platformKey', message: 'Unknown drive unit' }] } })
   return platform
 }

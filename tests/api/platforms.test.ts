@@ -43,6 +43,24 @@ describe('drive units', async () => {
     expect((await admin.call('POST', '/api/platforms', goodUpload(key))).status).toBe(409)
   })
 
+  it('keeps each workshop\'s keys its own: another workshop may use the same key, a shared key is taken by everyone', async () => {
+    const key = unique('kestrel').toLowerCase()
+    const theirs = await otherAdmin.call('POST', '/api/platforms', goodUpload(key))
+    expect(theirs.status).toBe(201)
+    const ours = await admin.call('POST', '/api/platforms', goodUpload(key))
+    expect(ours.status).toBe(201) // not a 409 that would tell us the other workshop has it
+    expect(ours.body.id).not.toBe(theirs.body.id)
+    expect((await tuner.call('GET', `/api/platforms/${key}`)).body.id).toBe(ours.body.id)
+    expect((await otherAdmin.call('GET', `/api/platforms/${key}`)).body.id).toBe(theirs.body.id)
+    const twice = await Promise.all([admin.call('POST', '/api/platforms', goodUpload(key)), admin.call('POST', '/api/platforms', goodUpload(key))])
+    expect(twice.map(r => r.status)).toEqual([409, 409])
+    const shared = await admin.call('POST', '/api/platforms', goodUpload('fenlow-45'))
+    expect(shared.status).toBe(409)
+    expect(shared.body.data.fields).toEqual([{ path: 'key', message: 'Already used' }])
+    // The database holds the rule too: a second unit of one workshop under one key is refused.
+    await expect(withDatabase(c => c.query('INSERT INTO platforms ("workshopId", key, name, "motorMaxRpm", schema, "createdAt", "updatedAt") SELECT "workshopId", key, name, "motorMaxRpm", schema, now(), now() FROM platforms WHERE id = $1', [ours.body.id]))).rejects.toThrow(/platforms_workshop_key/)
+  })
+
   it('refuses a schema that breaks the JSON Schema 2020-12 meta-schema, lists the problems and stores nothing', async () => {
     const key = unique('broken').toLowerCase()
     const upload = goodUpload(key)
