@@ -26,6 +26,7 @@ export async function clientCarView(vehicle: Vehicle): Promise<ClientCarView> {
     onCar,
     roadTest: test ? { testedAt: test.testedAt.toISOString(), verdict: test.verdict, surface: test.conditions?.surface ?? '' } : null,
     enhancements: enhancements.map(s => ({ id: s.id, title: s.title, detail: s.detail, status: s.status })),
-    handoverPdf: `/api/vehicles/${vehicle.id}/handover.pdf`
+    handoverPdf: `/api/vehicles/${vehicle.id}/handover.pdf`,
+    drift: vehicle.driftedAt ? { since: vehicle.driftedAt.toISOString() } : null
   }
 }

@@ -5,4 +5,6 @@ export interface ClientCarView {
   roadTest: { testedAt: string, verdict: 'pass' | 'fail', surface: string } | null
   enhancements: { id: number, title: string, detail: string, status: string }[]
   handoverPdf: string
+  // Set when the controller was last read and did not hold the signed-off settings.
+  drift: { since: string } | null
 }

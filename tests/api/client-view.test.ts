@@ -31,6 +31,18 @@ describe('a car owner sees their own cars and nothing else', async () => {
     expect(res.body.handoverPdf).toBe(`/api/vehicles/${mine.id}/handover.pdf`)
   })
 
+  it('warns the owner when the controller was read and did not hold the signed-off settings', async () => {
+    expect((await client.call('GET', `/api/vehicles/${mine.id}/client-view`)).body.drift).toBeNull()
+    const tester = await signIn('tester@voltwright.test')
+    const profileId = (await withDatabase(c => c.query('SELECT id FROM profiles WHERE "vehicleId" = $1', [mine.id]))).rows[0].id
+    const read = await tester.call('POST', `/api/vehicles/${mine.id}/readback`, { source: 'typed', profileId, parameters: { ...parameters, liftOffRegenPct: 60 } })
+    expect(read.status).toBe(201)
+    expect(read.body.matches).toBe(false)
+    const res = await client.call('GET', `/api/vehicles/${mine.id}/client-view`)
+    expect(Date.parse(res.body.drift.since)).toBeGreaterThan(Date.now() - 60_000)
+    expect(JSON.stringify(res.body)).not.toContain('liftOffRegenPct') // what differs stays with the workshop
+  })
+
   it('carries no workshop internals', async () => {
     const text = JSON.stringify((await client.call('GET', `/api/vehicles/${mine.id}/client-view`)).body)
     for (const internal of ['rationale', 'authorId', 'testerId', 'parameters', 'Inverter coolant', 'Dev Carrow', 'Sol Brannagh', 'contentHash', 'spec']) {
