@@ -7,9 +7,14 @@ const KEPT = 5000
 interface Opened { id: string, createdAt: number, data: Record<string, unknown> }
 const opened = new Map<string, Opened>()
 
+// As nuxt-auth-utils builds it: the runtime config's session with the password from the environment. Set once.
+let built: SessionConfig | undefined
 function sessionConfig(): SessionConfig {
-  const session = useRuntimeConfig().session as unknown as SessionConfig
-  return { ...session, password: process.env.NUXT_SESSION_PASSWORD || session.password }
+  if (!built) {
+    const session = useRuntimeConfig().session as unknown as SessionConfig
+    built = { ...session, password: process.env.NUXT_SESSION_PASSWORD || session.password }
+  }
+  return built
 }
 
 export default defineEventHandler(async (event) => {

@@ -3,17 +3,16 @@ import { QueryTypes } from 'sequelize'
 import type { Evaluation, PlatformLike } from '../../shared/compute'
 import type { EvaluateRequest } from '../../shared/schemas/evaluate'
 import type { VehicleSpec } from '../../shared/schemas/vehicle-spec'
-import { isStaff } from '../../shared/schemas/roles'
 
 interface CarRow { spec: VehicleSpec | null, key: string | null, name: string, motorMaxRpm: number, schema: unknown, settings: Record<string, unknown> | null }
 
 // The workshop's settings and, when asked for, the car with its own drive unit, in one plain query (the tune
-// sheet calls this on every change). Scoped as requireVehicle scopes: this workshop, and a car owner's own cars.
+// sheet calls this on every change), the car scoped as requireVehicle scopes it.
 async function loadCarAndSettings(user: SignedIn, vehicleId: number | undefined) {
   const car = vehicleId !== undefined
   const [row] = await useDatabase().query<CarRow>(
     `SELECT w.settings${car ? ', v.spec, pl.key, pl.name, pl."motorMaxRpm", pl.schema' : ''}
-       FROM workshops w${car ? ` LEFT JOIN vehicles v ON v.id = :vehicleId AND v."workshopId" = w.id${isStaff(user.roles) ? '' : ' AND v."ownerUserId" = :userId'}
+       FROM workshops w${car ? ` LEFT JOIN vehicles v ON v.id = :vehicleId AND ${vehicleScopeSql(user, 'v')}
        LEFT JOIN platforms pl ON pl.id = v."platformId"` : ''}
       WHERE w.id = :workshopId`,
     { replacements: { workshopId: user.workshopId, vehicleId, userId: user.id }, type: QueryTypes.SELECT })

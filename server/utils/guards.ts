@@ -52,11 +52,16 @@ export async function requireVehicle(event: H3Event, id: number): Promise<{ user
   return { user, vehicle }
 }
 
+// The cars a person may read, as SQL on the vehicles table under `alias` (requireVehicle's scope, for plain
+// queries): their workshop's, and for a car owner only their own. Needs :workshopId and :userId replaced.
+export function vehicleScopeSql(user: SignedIn, alias: string): string {
+  return `${alias}."workshopId" = :workshopId${isStaff(user.roles) ? '' : ` AND ${alias}."ownerUserId" = :userId`}`
+}
+
 // The same scope where the route needs only to know the car may be read (one plain query, no model).
 export async function requireVehicleAccess(event: H3Event, id: number): Promise<SignedIn> {
   const user = await requireUser(event)
-  const own = isStaff(user.roles) ? '' : ' AND "ownerUserId" = :userId'
-  const found = await useDatabase().query(`SELECT 1 FROM vehicles WHERE id = :id AND "workshopId" = :workshopId${own}`,
+  const found = await useDatabase().query(`SELECT 1 FROM vehicles v WHERE v.id = :id AND ${vehicleScopeSql(user, 'v')}`,
     { replacements: { id, workshopId: user.workshopId, userId: user.id }, type: QueryTypes.SELECT })
   if (!found.length) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
   return user

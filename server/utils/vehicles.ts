@@ -1,7 +1,6 @@
 import { QueryTypes } from 'sequelize'
 import { Platform, User, Vehicle } from '../models'
 import type { SignedIn } from './guards'
-import { isStaff } from '../../shared/schemas/roles'
 import type { VehicleCreate, VehicleListQuery, VehicleUpdate, VehicleView } from '../../shared/schemas/vehicle'
 import { jsonPatch } from '../../shared/utils/json-patch'
 
@@ -9,8 +8,8 @@ export function vehicleView(v: Vehicle): VehicleView {
   return {
     id: v.id, stockRef: v.stockRef, make: v.make, model: v.model, year: v.year,
     chassisNumber: v.chassisNumber, registration: v.registration, status: v.status, spec: v.spec,
-    ownerUserId: v.ownerUserId, owner: v.owner?.id ? { id: v.owner.id, name: v.owner.name } : null,
-    platform: v.platform?.key ? { key: v.platform.key, name: v.platform.name } : null,
+    ownerUserId: v.ownerUserId, owner: v.owner ? { id: v.owner.id, name: v.owner.name } : null,
+    platform: v.platform ? { key: v.platform.key, name: v.platform.name } : null,
     driftedAt: v.driftedAt ?? null,
     createdAt: v.createdAt, updatedAt: v.updatedAt
   }
@@ -21,9 +20,8 @@ const include = [{ model: Platform, as: 'platform' }, { model: User, as: 'owner'
 // One plain query for the page and its count (the list is the busiest read): of the drive unit only what the
 // list shows, not its schema. Sort fields come from the schema's own list, so they are safe to name in SQL.
 export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
-  const where = ['v."workshopId" = :workshopId']
-  const replacements: Record<string, unknown> = { workshopId: user.workshopId, limit: q.pageSize, offset: (q.page - 1) * q.pageSize }
-  if (!isStaff(user.roles)) { where.push('v."ownerUserId" = :ownerId'); replacements.ownerId = user.id }
+  const where = [vehicleScopeSql(user, 'v')]
+  const replacements: Record<string, unknown> = { workshopId: user.workshopId, userId: user.id, limit: q.pageSize, offset: (q.page - 1) * q.pageSize }
   if (q.status) { where.push('v.status = :status'); replacements.status = q.status }
   if (q.q) {
     where.push(`(${['make', 'model', '"stockRef"', 'registration'].map(f => `v.${f} ILIKE :like`).join(' OR ')})`)
