@@ -65,7 +65,7 @@ export default defineNuxtConfig({
       xFrameOptions: 'DENY',
       referrerPolicy: 'same-origin'
     },
-    // Limits live in PostgreSQL (server/utils/rate-limit.ts) so that every instance shares them.
+    // Limits live in PostgreSQL (server/utils/people/sign-in-limits.ts) so that every instance shares them.
     rateLimiter: false,
     // Telemetry logs may be up to 50 MB; the upload route itself answers 413 above that.
     requestSizeLimiter: { maxRequestSizeInBytes: 2_000_000, maxUploadFileRequestInBytes: 60_000_000 },

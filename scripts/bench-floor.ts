@@ -28,7 +28,7 @@ async function history(workshopId: number, vehicleId: number) {
     FROM audit_events e LEFT JOIN users u ON u.id = e."actorId" LEFT JOIN vehicles v ON v.id = e."vehicleId"
     WHERE e."workshopId" = $1 AND e."vehicleId" = $2 ORDER BY e.id DESC LIMIT 51`, [workshopId, vehicleId])
   const page = rows.slice(0, 50) as { id: string, entityType: string, entityId: string, data: { patch?: { op: string }[], before?: unknown } }[]
-  // The before-values of patches that carry none: each such entity's earlier events, as server/utils/history.ts reads them.
+  // The before-values of patches that carry none: each such entity's earlier events, as server/utils/history/read.ts reads them.
   const oldest = new Map<string, { et: string, ei: string, id: string }>()
   for (const r of page) {
     if (Array.isArray(r.data.patch) && r.data.patch.some(o => o.op !== 'test') && r.data.before === undefined) oldest.set(`${r.entityType}\u0000${r.entityId}`, { et: r.entityType, ei: r.entityId, id: r.id })

@@ -4,7 +4,7 @@ import { createReadStream, mkdtempSync, writeFileSync, statSync } from 'node:fs'
 import { cpus, loadavg, tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { monitorEventLoopDelay, performance } from 'node:perf_hooks'
-import { digestTelemetry } from '../server/utils/telemetry-csv'
+import { digestTelemetry } from '../server/utils/road-tests/telemetry-csv'
 import { syntheticDrive, telemetryCsv } from '../shared/telemetry/synthetic'
 
 const ROWS = 100_000

@@ -5,7 +5,7 @@
 import pg from 'pg'
 import { Hash } from '@adonisjs/hash'
 import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
-import { auditHash } from '../server/utils/audit'
+import { auditHash } from '../server/utils/history/audit'
 import { defaultParameters, findPlatform } from '../shared/platforms'
 import { exampleSpec } from '../shared/compute/example'
 

@@ -4,7 +4,7 @@ import { Hash } from '@adonisjs/hash'
 import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
 import { platforms } from '../shared/platforms'
 import { vehicleSpecSchema } from '../shared/schemas/vehicle-spec'
-import { appendAuditEvent } from '../server/utils/audit'
+import { appendAuditEvent } from '../server/utils/history/audit'
 import { demoCars, secondWorkshopCar, type DemoCar } from './demo-cars'
 
 // Demo only: every demo person signs in with this password (README).

@@ -1,6 +1,6 @@
 import type { MigrationFn } from 'umzug'
 import { QueryTypes, type QueryInterface, type Transaction } from 'sequelize'
-import { appendAuditEvent, sha256Hex } from '../server/utils/audit'
+import { appendAuditEvent, sha256Hex } from '../server/utils/history/audit'
 import { canonicalJson } from '../shared/utils/canonical-json'
 import { defaultParameters, findPlatform } from '../shared/platforms'
 import { compareReadback } from '../shared/utils/readback-compare'

@@ -11,7 +11,7 @@ const LOST_MESSAGE = /Connection terminated|not queryable|terminating connection
 
 interface Cause { name?: string, code?: string, message?: string, cause?: Cause, parent?: Cause, original?: Cause, objectStore?: boolean, $metadata?: { httpStatusCode?: number } }
 
-// The object store refused, dropped or timed out the connection, or answered 5xx (marked in server/utils/storage.ts).
+// The object store refused, dropped or timed out the connection, or answered 5xx (marked in server/utils/storage/object-store.ts).
 const STORE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', 'EHOSTUNREACH', 'ENETUNREACH', 'ENOTFOUND', 'EAI_AGAIN'])
 function storeUnreachable(error: Cause | undefined, depth = 0): boolean {
   if (!error || depth > 6) return false

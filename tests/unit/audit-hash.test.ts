@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto'
 import { describe, it, expect } from 'vitest'
 import fc from 'fast-check'
-import { auditHash, auditHashBody, sha256Hex } from '../../server/utils/audit'
+import { auditHash, auditHashBody, sha256Hex } from '../../server/utils/history/audit'
 import { canonicalJson } from '../../shared/utils/canonical-json'
 
 const event = {

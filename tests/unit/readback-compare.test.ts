@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest'
 import { compareReadback } from '../../shared/utils/readback-compare'
 import { readbackDocumentSchema, readbackBodySchema } from '../../shared/schemas/readback'
-import { csvCell, csvLine } from '../../server/utils/csv'
+import { csvCell, csvLine } from '../../server/utils/history/csv'
 
 describe('a read-back against the signed-off version', () => {
   it('matches within half a step and names every difference', () => {

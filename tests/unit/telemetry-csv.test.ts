@@ -1,6 +1,6 @@
 import { Readable } from 'node:stream'
 import { describe, expect, it } from 'vitest'
-import { digestTelemetry } from '../../server/utils/telemetry-csv'
+import { digestTelemetry } from '../../server/utils/road-tests/telemetry-csv'
 import { TelemetryRowError } from '../../shared/telemetry/columns'
 import { syntheticDrive, telemetryCsv } from '../../shared/telemetry/synthetic'
 import { summarise } from '../../shared/telemetry/summary'

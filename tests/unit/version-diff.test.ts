@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest'
-import { numericChange, warningDiff, figureDiff } from '../../server/utils/diff-figures'
+import { numericChange, warningDiff, figureDiff } from '../../server/utils/versions/diff-figures'
 import { evaluate } from '../../shared/compute/evaluate'
 import { exampleSpec } from '../../shared/compute/example'
 import { defaultParameters, fenlow45 } from '../../shared/platforms/index'

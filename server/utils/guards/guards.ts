@@ -1,0 +1,69 @@
+import type { H3Event } from 'h3'
+import { z } from 'zod'
+import { QueryTypes } from 'sequelize'
+import { Vehicle } from '../../models'
+import { isStaff, type Role } from '../../../shared/schemas/roles'
+import { useDatabase } from '../database/db'
+
+export interface SignedIn { id: number, workshopId: number, email: string, name: string, roles: Role[] }
+
+// The session says who signed in; the database says whether they still may: deactivation and signing out
+// take effect at once, for every copy of the cookie.
+export async function requireUser(event: H3Event): Promise<SignedIn> {
+  if (event.context.signedIn) return event.context.signedIn as SignedIn
+  const session = await getUserSession(event)
+  const id = session.user?.id
+  if (!id) throw createError({ statusCode: 401, message: 'Please sign in.' })
+  // One plain query: this runs on every request.
+  const [user] = await useDatabase().query<SignedIn & { active: boolean, revoked: boolean }>(
+    `SELECT id, "workshopId", email, name, roles, active, EXISTS (SELECT 1 FROM revoked_sessions WHERE "sessionId" = :sessionId) AS revoked
+       FROM users WHERE id = :id`, { replacements: { id, sessionId: session.id ?? '' }, type: QueryTypes.SELECT })
+  if (!user || !user.active || user.revoked) {
+    await clearUserSession(event)
+    throw createError({ statusCode: 401, message: 'Please sign in.' })
+  }
+  const signedIn = { id: user.id, workshopId: user.workshopId, email: user.email, name: user.name, roles: user.roles }
+  event.context.signedIn = signedIn
+  return signedIn
+}
+
+export async function requireRole(event: H3Event, ...allowed: Role[]): Promise<SignedIn> {
+  const user = await requireUser(event)
+  if (!user.roles.some(r => allowed.includes(r))) {
+    throw createError({ statusCode: 403, message: `This needs the role of ${allowed.join(' or ')}.` })
+  }
+  return user
+}
+
+export async function requireStaff(event: H3Event): Promise<SignedIn> {
+  const user = await requireUser(event)
+  if (!isStaff(user.roles)) throw createError({ statusCode: 403, message: 'Only workshop staff can do this.' })
+  return user
+}
+
+export const idParamSchema = z.object({ id: z.coerce.number().int().positive().max(2147483647) })
+
+// A car of the signed-in person's workshop; a car owner reaches only their own. Anything else is 404.
+export async function requireVehicle(event: H3Event, id: number): Promise<{ user: SignedIn, vehicle: Vehicle }> {
+  const user = await requireUser(event)
+  const where: Record<string, unknown> = { id, workshopId: user.workshopId }
+  if (!isStaff(user.roles)) where.ownerUserId = user.id
+  const vehicle = await Vehicle.findOne({ where, include: ['platform'] })
+  if (!vehicle) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
+  return { user, vehicle }
+}
+
+// The cars a person may read, as SQL on the vehicles table under `alias` (requireVehicle's scope, for plain
+// queries): their workshop's, and for a car owner only their own. Needs :workshopId and :userId replaced.
+export function vehicleScopeSql(user: SignedIn, alias: string): string {
+  return `${alias}."workshopId" = :workshopId${isStaff(user.roles) ? '' : ` AND ${alias}."ownerUserId" = :userId`}`
+}
+
+// The same scope where the route needs only to know the car may be read (one plain query, no model).
+export async function requireVehicleAccess(event: H3Event, id: number): Promise<SignedIn> {
+  const user = await requireUser(event)
+  const found = await useDatabase().query(`SELECT 1 FROM vehicles v WHERE v.id = :id AND ${vehicleScopeSql(user, 'v')}`,
+    { replacements: { id, workshopId: user.workshopId, userId: user.id }, type: QueryTypes.SELECT })
+  if (!found.length) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
+  return user
+}

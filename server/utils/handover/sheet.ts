@@ -1,0 +1,83 @@
+// Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
+// justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
+import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
+import { HANDOVER_CAUTIONS, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
+import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
+import { checkGuides, checkTitles } from '../../../shared/schemas/road-test-checks'
+import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
+import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
+import type { TelemetrySummary } from '../../../shared/telemetry/summary'
+import { carFactLines, figureLines, settingLines } from './words'
+import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
+
+const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
+
+// In the order the check's guide lists its values (JSONB does not keep the order they were sent in).
+function measured(key: string, values: Record<string, unknown>): string {
+  const order = checkGuides.find(g => g.key === key)?.fields.map(f => f.name) ?? []
+  const rank = (k: string) => (order.includes(k) ? order.indexOf(k) : order.length)
+  return Object.entries(values ?? {}).sort(([a], [b]) => rank(a) - rank(b)).filter(([, v]) => v !== null && v !== undefined && v !== '')
+    .map(([k, v]) => typeof v === 'number' ? `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} ${units[k] ?? k}` : `${k}: ${String(v)}`).join(', ') || '—'
+}
+
+function logLines(s: TelemetrySummary | undefined) {
+  if (!s) return []
+  const f = (x: number | null, d = 1) => x === null ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: d })
+  return [
+    { label: 'Logged', value: `${s.samples.toLocaleString('en-GB')} samples over ${f(s.durationS / 60, 1)} min` },
+    { label: 'Peak speed', value: `${f(s.peakSpeedKph, 0)} km/h` },
+    { label: 'Peak battery power', value: `${f(s.peakPowerKw, 1)} kW` },
+    { label: 'Strongest lift-off slowing', value: `${f(s.peakLiftOffDecelMs2, 2)} m/s²` },
+    { label: 'Roll-back on the hill start', value: `${f(s.maxRollbackM * 1000, 0)} mm` },
+    { label: 'Peak temperatures', value: `motor ${f(s.peakMotorC, 0)} °C, inverter ${f(s.peakInverterC, 0)} °C, battery ${f(s.peakBatteryC, 0)} °C` },
+    { label: 'Energy', value: `${f(s.energyOutWh / 1000, 2)} kWh used, ${f(s.energyRegenWh / 1000, 2)} kWh recovered by regen` }
+  ]
+}
+
+async function profileSheet(vehicle: Vehicle, profile: Profile, version: ProfileVersion): Promise<HandoverProfile> {
+  const [author, review, rt] = await Promise.all([
+    User.findByPk(version.authorId, { attributes: ['name'] }),
+    Review.findOne({ where: { versionId: version.id, decision: 'approve' }, order: [['id', 'DESC']], include: [{ model: User, as: 'reviewer', attributes: ['name'] }] }),
+    RoadTest.findOne({ where: { versionId: version.id, verdict: 'pass' }, order: [['id', 'DESC']], include: [{ model: User, as: 'tester', attributes: ['name'] }] }).then(async r => r?.signed ? r : null)
+  ])
+  const log = rt ? await TelemetryLog.findOne({ where: { roadTestId: rt.id }, order: [['id', 'DESC']] }) : null
+  const evaluation = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(vehicle.workshopId))
+  const tester = (rt as RoadTest & { tester?: User } | null)?.tester?.name ?? ''
+  return {
+    profileName: profile.name, versionNo: version.versionNo, versionId: version.id, signedOffAt: rt?.signed?.at ?? null,
+    settings: settingLines(version.parameters), figures: figureLines(evaluation, vehicle.spec),
+    warnings: evaluation.warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message, justification: version.justifications?.[w.rule] ?? null })),
+    roadTest: rt ? {
+      id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), tester, verdict: rt.verdict,
+      conditions: `${surfaceLabels[rt.conditions.surface]} road, ${rt.conditions.ambientC} °C${rt.conditions.route ? `, ${rt.conditions.route}` : ''}`,
+      checks: rt.checks.map(c => ({ label: checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict, measured: measured(c.key, c.values), note: c.note })),
+      log: logLines(log?.summary as TelemetrySummary | undefined)
+    } : null,
+    people: [
+      { role: 'Proposed by', name: author?.name ?? '—', at: (version.submittedAt ?? version.createdAt)?.toISOString() ?? null, hash: version.contentHash, hashLabel: 'settings hash' },
+      { role: 'Approved by', name: (review as Review & { reviewer?: User } | null)?.reviewer?.name ?? '—', at: review ? new Date(review.createdAt).toISOString() : (version.decidedAt?.toISOString() ?? null), hash: version.contentHash, hashLabel: 'settings hash' },
+      { role: 'Road-tested and signed off by', name: tester || '—', at: rt?.signed?.at ?? null, hash: rt?.signed?.contentHash ?? null, hashLabel: 'road-test record hash' }
+    ]
+  }
+}
+
+export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
+  await vehicle.reload({ include: ['platform', 'owner'] })
+  const profiles = await Profile.findAll({ where: { vehicleId: vehicle.id }, order: [['id', 'ASC']] })
+  const onCar = profiles.filter(p => p.onCarVersionId)
+  if (!onCar.length) throw createError({ statusCode: 409, message: 'No profile has been signed off for this car yet: the handover sheet follows sign-off.' })
+  const versions = await ProfileVersion.findAll({ where: { id: onCar.map(p => p.onCarVersionId!) } })
+  const [workshop, enhancements] = await Promise.all([
+    Workshop.findByPk(vehicle.workshopId, { attributes: ['name'] }),
+    Snag.findAll({ where: { vehicleId: vehicle.id, kind: 'enhancement', status: unresolvedSnagStatuses }, order: [['id', 'ASC']] })
+  ])
+  const owner = (vehicle as Vehicle & { owner?: User | null }).owner
+  return {
+    workshop: workshop?.name ?? '', generatedAt: new Date().toISOString(),
+    car: { id: vehicle.id, title: `${vehicle.year} ${vehicle.make} ${vehicle.model}`, stockRef: vehicle.stockRef, registration: vehicle.registration, chassisNumber: vehicle.chassisNumber, owner: owner?.name ?? null, driveUnit: vehicle.platform?.name ?? '', status: vehicleStatusLabels[vehicle.status as VehicleStatus] },
+    carFacts: carFactLines(vehicle.spec, vehicle.platform?.name ?? ''),
+    profiles: await Promise.all(onCar.map(p => profileSheet(vehicle, p, versions.find(v => v.id === p.onCarVersionId)!))),
+    enhancements: enhancements.map(s => ({ title: s.title, detail: s.detail, priority: snagPriorityLabels[s.priority as SnagPriority] })),
+    cautions: HANDOVER_CAUTIONS
+  }
+}

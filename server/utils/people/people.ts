@@ -1,0 +1,35 @@
+import { User } from '../../models'
+import type { SignedIn } from '../guards/guards'
+import type { UserCreate, UserUpdate } from '../../../shared/schemas/user'
+import { jsonPatch } from '../../../shared/utils/json-patch'
+import { useDatabase } from '../database/db'
+import { appendAuditEvent } from '../history/audit'
+
+export async function createPerson(admin: SignedIn, input: UserCreate) {
+  if (await User.findOne({ where: { email: input.email } })) {
+    throw createError({ statusCode: 409, message: 'Someone already signs in with this e-mail address.', data: { fields: [{ path: 'email', message: 'Already used' }] } })
+  }
+  const passwordHash = await hashPassword(input.password)
+  return useDatabase().transaction(async (transaction) => {
+    const user = await User.create({ workshopId: admin.workshopId, email: input.email, name: input.name, roles: input.roles, passwordHash }, { transaction })
+    await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'user.created', entityType: 'user', entityId: user.id, data: { after: { email: user.email, name: user.name, roles: user.roles } } })
+    return user.toPublic()
+  })
+}
+
+export async function updatePerson(admin: SignedIn, id: number, input: UserUpdate) {
+  if (id === admin.id && (input.active === false || (input.roles && !input.roles.includes('admin')))) {
+    throw createError({ statusCode: 409, message: 'You cannot deactivate yourself or remove your own manager role; ask another manager.' })
+  }
+  const passwordHash = input.password ? await hashPassword(input.password) : undefined
+  return useDatabase().transaction(async (transaction) => {
+    const user = await User.findOne({ where: { id, workshopId: admin.workshopId }, transaction, lock: transaction.LOCK.UPDATE })
+    if (!user) throw createError({ statusCode: 404, message: 'No such person in this workshop.' })
+    const before = { name: user.name, roles: user.roles, active: user.active }
+    const { password: _password, ...fields } = input
+    await user.update({ ...fields, ...(passwordHash ? { passwordHash } : {}) }, { transaction })
+    const patch = jsonPatch(before, { name: user.name, roles: user.roles, active: user.active })
+    await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'user.updated', entityType: 'user', entityId: user.id, data: { patch, passwordChanged: Boolean(passwordHash) } })
+    return user.toPublic()
+  })
+}

@@ -1,0 +1,43 @@
+// The tester's bench: approved versions awaiting a road test, oldest approval first.
+import { fn, col } from 'sequelize'
+import { Profile, ProfileVersion, RoadTest, Vehicle } from '../../models'
+import type { SignedIn } from '../guards/guards'
+import type { AwaitingRoadTest } from '../../../shared/schemas/road-test-views'
+import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
+import { findTestedVersion } from './record'
+
+export async function awaitingRoadTests(user: SignedIn): Promise<{ items: AwaitingRoadTest[], total: number }> {
+  const versions = await ProfileVersion.findAll({
+    where: { workshopId: user.workshopId, state: 'approved' },
+    include: [{ model: Profile, as: 'profile', include: [{ model: Vehicle, as: 'vehicle' }] }],
+    order: [['decidedAt', 'ASC'], ['id', 'ASC']]
+  })
+  const counts = versions.length
+    ? await RoadTest.findAll({ where: { versionId: versions.map(v => v.id) }, attributes: ['versionId', [fn('count', col('id')), 'n']], group: ['versionId'], raw: true }) as unknown as { versionId: number, n: string }[]
+    : []
+  const items = versions.map((v) => {
+    const car = (v.profile as Profile & { vehicle?: Vehicle }).vehicle!
+    return {
+      versionId: v.id, versionNo: v.versionNo, profileId: v.profileId, profileName: v.profile!.name, approvedAt: v.decidedAt ? new Date(v.decidedAt).toISOString() : null,
+      vehicle: { id: car.id, stockRef: car.stockRef, make: car.make, model: car.model, year: car.year },
+      roadTests: Number(counts.find(c => c.versionId === v.id)?.n ?? 0)
+    }
+  })
+  return { items, total: items.length }
+}
+
+export async function roadTestBrief(user: SignedIn, versionId: number) {
+  const { version, profile, vehicle } = await findTestedVersion(user, versionId)
+  const { figures, warnings } = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(user.workshopId))
+  return {
+    version: { id: version.id, versionNo: version.versionNo, state: version.state, authorId: version.authorId, parameters: version.parameters },
+    profile: { id: profile.id, name: profile.name },
+    vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null },
+    platformSchema: vehicle.platform?.schema ?? null,
+    expected: {
+      maxStartGradePct: figures.maxStartGradePct, creepHoldGradePct: figures.creepHoldGradePct, liftOffDecelMs2: figures.liftOffDecelMs2,
+      brakeRegenDecelMs2: figures.brakeRegenDecelMs2, topSpeedKph: figures.topSpeedKph, zeroTo50S: figures.zeroTo50S, regenGripLimitMs2: figures.regenGripLimitMs2
+    },
+    warnings: warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message }))
+  }
+}

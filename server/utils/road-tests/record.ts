@@ -1,0 +1,109 @@
+// Recording and reading road tests of approved versions (DESIGN §5).
+import { Op, type Transaction } from 'sequelize'
+import { Attachment, Platform, Profile, ProfileVersion, RoadTest, TelemetryLog, User, Vehicle } from '../../models'
+import type { RoadTestCheck } from '../../models/road-test'
+import type { SignedIn } from '../guards/guards'
+import { isStaff } from '../../../shared/schemas/roles'
+import type { RoadTestCreate } from '../../../shared/schemas/road-test'
+import type { AttachmentView, RoadTestListItem, RoadTestView } from '../../../shared/schemas/road-test-views'
+import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
+import { useDatabase } from '../database/db'
+import { appendAuditEvent } from '../history/audit'
+
+export interface TestedVersion { version: ProfileVersion, profile: Profile, vehicle: Vehicle }
+
+const notFound = (what: string) => createError({ statusCode: 404, message: `No such ${what} in this workshop.` })
+
+// A version of the signed-in person's workshop with its profile and car; road tests are for staff only.
+export async function findTestedVersion(user: SignedIn, versionId: number, transaction?: Transaction): Promise<TestedVersion> {
+  if (!isStaff(user.roles)) throw notFound('version')
+  const version = await ProfileVersion.findOne({ where: { id: versionId, workshopId: user.workshopId }, transaction })
+  if (!version) throw notFound('version')
+  const profile = await Profile.findByPk(version.profileId, { transaction })
+  const vehicle = await Vehicle.findOne({ where: { id: profile!.vehicleId, workshopId: user.workshopId }, include: [{ model: Platform, as: 'platform' }], transaction })
+  if (!profile || !vehicle) throw notFound('version')
+  return { version, profile, vehicle }
+}
+
+export function requireApproved(version: ProfileVersion, doing: string) {
+  if (version.state !== 'approved') {
+    const label = versionStateLabels[version.state as VersionState] ?? version.state
+    throw createError({ statusCode: 409, message: `Version ${version.versionNo} is ${label.toLowerCase()} (${version.state}); only an approved version can be ${doing}.`, data: { state: version.state } })
+  }
+}
+
+export const carLabel = (v: Pick<Vehicle, 'stockRef' | 'year' | 'make' | 'model'>) => `${v.stockRef} ${v.year} ${v.make} ${v.model}`
+
+export async function recordRoadTest(user: SignedIn, versionId: number, input: RoadTestCreate) {
+  const { version, vehicle } = await findTestedVersion(user, versionId)
+  requireApproved(version, 'road-tested')
+  const id = await useDatabase().transaction(async (transaction) => {
+    const rt = await RoadTest.create({
+      workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id,
+      testedAt: input.testedAt ?? new Date(), conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict
+    }, { transaction })
+    // A car on its first road test has moved on from the workshop floor.
+    if (vehicle.status === 'intake' || vehicle.status === 'converting') {
+      await Vehicle.update({ status: 'road-testing' }, { where: { id: vehicle.id }, transaction })
+      await appendAuditEvent(transaction, { workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'vehicle.status-changed', entityType: 'vehicle', entityId: vehicle.id, data: { from: vehicle.status, to: 'road-testing', because: `road test ${rt.id}` } })
+    }
+    await appendAuditEvent(transaction, {
+      workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'road-test.recorded', entityType: 'road-test', entityId: rt.id,
+      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict })) }
+    })
+    return rt.id
+  })
+  return readRoadTest(user, id)
+}
+
+// A road test of the signed-in person's workshop (staff only); 404 otherwise.
+export async function findRoadTest(user: SignedIn, id: number, transaction?: Transaction, lock = false): Promise<RoadTest> {
+  if (!isStaff(user.roles)) throw notFound('road test')
+  const rt = await RoadTest.findOne({ where: { id, workshopId: user.workshopId }, transaction, ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}) })
+  if (!rt) throw notFound('road test')
+  return rt
+}
+
+export function attachmentView(a: Attachment): AttachmentView {
+  return { id: a.id, filename: a.filename, contentType: a.contentType, bytes: Number(a.bytes), sha256: a.sha256, caption: a.caption, hasThumbnail: Boolean(a.thumbnailKey), createdAt: new Date(a.createdAt).toISOString() }
+}
+
+export async function readRoadTest(user: SignedIn, id: number): Promise<RoadTestView> {
+  const rt = await findRoadTest(user, id)
+  const [version, vehicle, tester, logs, photos, roadside] = await Promise.all([
+    ProfileVersion.findByPk(rt.versionId, { include: [{ model: Profile, as: 'profile' }] }),
+    Vehicle.findByPk(rt.vehicleId),
+    User.findByPk(rt.testerId, { attributes: ['id', 'name'] }),
+    TelemetryLog.findAll({ where: { roadTestId: rt.id }, order: [['id', 'ASC']] }),
+    Attachment.findAll({ where: { ownerType: 'road-test', ownerId: rt.id, workshopId: user.workshopId }, order: [['id', 'ASC']] }),
+    ProfileVersion.findAll({ where: { roadTestId: rt.id }, attributes: ['id', 'versionNo', 'state'], order: [['versionNo', 'ASC']] })
+  ])
+  const files = await Attachment.findAll({ where: { id: { [Op.in]: logs.map(l => l.attachmentId) } } })
+  return {
+    id: rt.id, vehicleId: rt.vehicleId,
+    version: { id: version!.id, versionNo: version!.versionNo, state: version!.state, profileId: version!.profileId, profileName: version!.profile?.name ?? '', authorId: version!.authorId, contentHash: version!.contentHash },
+    vehicle: { id: vehicle!.id, stockRef: vehicle!.stockRef, make: vehicle!.make, model: vehicle!.model, year: vehicle!.year, status: vehicle!.status },
+    tester: { id: tester?.id ?? rt.testerId, name: tester?.name ?? '' },
+    testedAt: new Date(rt.testedAt).toISOString(), conditions: rt.conditions, checks: rt.checks as RoadTestView['checks'],
+    verdict: rt.verdict, signed: rt.signed ?? null,
+    telemetry: logs.map(l => ({ id: l.id, attachment: attachmentView(files.find(f => f.id === l.attachmentId)!), summary: l.summary as never, createdAt: new Date(l.createdAt).toISOString() })),
+    photos: photos.map(attachmentView),
+    roadsideVersions: roadside.map(v => ({ id: v.id, versionNo: v.versionNo, state: v.state }))
+  }
+}
+
+export async function listVehicleRoadTests(vehicle: Vehicle): Promise<{ items: RoadTestListItem[], total: number }> {
+  const rows = await RoadTest.findAll({
+    where: { vehicleId: vehicle.id, workshopId: vehicle.workshopId }, order: [['testedAt', 'DESC'], ['id', 'DESC']],
+    include: [{ model: User, as: 'tester', attributes: ['id', 'name'] }, { model: ProfileVersion, as: 'version', attributes: ['id', 'versionNo', 'profileId'], include: [{ model: Profile, as: 'profile', attributes: ['name'] }] }]
+  })
+  const items = rows.map((rt) => {
+    const r = rt as RoadTest & { tester?: User, version?: ProfileVersion }
+    return {
+      id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), verdict: rt.verdict, signed: Boolean(rt.signed), testerName: r.tester?.name ?? '',
+      versionId: rt.versionId, versionNo: r.version?.versionNo ?? 0, profileName: r.version?.profile?.name ?? '',
+      failedChecks: rt.checks.filter(c => c.verdict === 'fail').map(c => c.key) as RoadTestListItem['failedChecks']
+    }
+  })
+  return { items, total: items.length }
+}

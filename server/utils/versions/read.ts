@@ -1,0 +1,66 @@
+import { QueryTypes } from 'sequelize'
+import { Profile, ProfileVersion, Review, User, type Vehicle } from '../../models'
+import type { SignedIn } from '../guards/guards'
+import type { EvaluationSnapshot, HistoryEntry, ProfileView, VersionView } from '../../../shared/schemas/profile-views'
+import { useDatabase } from '../database/db'
+import { vehicleView } from '../fleet/vehicles'
+import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
+import { reviewView, versionSummary, authorInclude, reviewsInclude, loadVersion } from './views'
+
+interface EventRow { id: string, action: string, actorId: number | null, actorName: string | null, createdAt: Date, data: Record<string, unknown> }
+
+// The version's own events from the audit chain: created, edited, submitted, decided, withdrawn.
+async function versionHistory(vehicleId: number, versionId: number): Promise<HistoryEntry[]> {
+  const rows = await useDatabase().query<EventRow>(
+    `SELECT e.id, e.action, e."actorId", u.name AS "actorName", e."createdAt", e.data
+       FROM audit_events e LEFT JOIN users u ON u.id = e."actorId"
+      WHERE e."vehicleId" = :vehicleId AND e."entityType" = 'version' AND e."entityId" = :versionId ORDER BY e.id`,
+    { replacements: { vehicleId, versionId: String(versionId) }, type: QueryTypes.SELECT })
+  return rows.map(r => ({
+    id: String(r.id), action: r.action, actor: r.actorId ? { id: r.actorId, name: r.actorName ?? '' } : null,
+    createdAt: new Date(r.createdAt).toISOString(), data: r.data
+  }))
+}
+
+export async function readVersion(user: SignedIn, id: number): Promise<VersionView> {
+  const { version: v, profile, vehicle, platform } = await loadVersion(user, id)
+  const [author, reviews, parent, history, settings] = await Promise.all([
+    User.findByPk(v.authorId, { attributes: ['id', 'name'] }),
+    Review.findAll({ where: { versionId: v.id }, include: [{ model: User, as: 'reviewer', attributes: ['id', 'name'] }], order: [['id', 'ASC']] }),
+    v.parentVersionId ? ProfileVersion.findByPk(v.parentVersionId, { attributes: ['id', 'versionNo'] }) : null,
+    versionHistory(vehicle.id, v.id),
+    loadWorkshopSettings(user.workshopId)
+  ])
+  v.author = author ?? undefined
+  const { lastReview: _last, ...summary } = versionSummary(v)
+  return {
+    ...summary,
+    parameters: v.parameters,
+    justifications: v.justifications,
+    evaluation: v.evaluation as EvaluationSnapshot | null,
+    contentHash: v.contentHash,
+    lockVersion: v.lockVersion,
+    onCar: profile.onCarVersionId === v.id,
+    profile: { id: profile.id, name: profile.name, onCarVersionId: profile.onCarVersionId },
+    vehicle: vehicleView(vehicle),
+    platform: { key: platform.key, name: platform.name, motorMaxRpm: platform.motorMaxRpm, schema: platform.schema },
+    parent: parent ? { id: parent.id, versionNo: parent.versionNo } : null,
+    reviews: reviews.map(reviewView),
+    history,
+    liveEvaluation: evaluateOnServer(vehicle.spec, platform, v.parameters, settings)
+  }
+}
+
+// A car's profiles, each with its versions newest first and the last review of each.
+export async function listProfiles(user: SignedIn, vehicle: Vehicle): Promise<{ items: ProfileView[], total: number }> {
+  const profiles = await Profile.findAll({
+    where: { vehicleId: vehicle.id, workshopId: user.workshopId },
+    include: [{ model: ProfileVersion, as: 'versions', include: [authorInclude, reviewsInclude] }],
+    order: [['name', 'ASC'], [{ model: ProfileVersion, as: 'versions' }, 'versionNo', 'DESC']]
+  })
+  const items = profiles.map(p => ({
+    id: p.id, vehicleId: p.vehicleId, name: p.name, onCarVersionId: p.onCarVersionId,
+    versions: (p.versions ?? []).map(versionSummary)
+  }))
+  return { items, total: items.length }
+}
