@@ -1,6 +1,6 @@
 import type { PlatformUpload } from '~~/shared/schemas/platform'
 
-export interface PlatformView { id: number, key: string, name: string, motorMaxRpm: number, schema: Record<string, unknown>, shared: boolean }
+export interface PlatformView { id: number, key: string, name: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: Record<string, unknown>, shared: boolean }
 
 export function usePlatforms() {
   const list = useFetch<{ items: PlatformView[], total: number }>('/api/platforms', { key: 'platforms' })

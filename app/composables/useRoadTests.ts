@@ -1,9 +1,10 @@
+import type { SettingValues } from '~~/shared/compute/parameter-input'
 import type { RoadTestCreate, RoadsideVersionInput } from '~~/shared/schemas/road-test'
 import type { AwaitingRoadTest, RoadTestChart, RoadTestListItem, RoadTestView } from '~~/shared/schemas/road-test-views'
 import type { Severity } from '~~/shared/compute/types'
 
 export interface RoadTestBrief {
-  version: { id: number, versionNo: number, state: string, authorId: number, parameters: Record<string, number> }
+  version: { id: number, versionNo: number, state: string, authorId: number, parameters: SettingValues }
   profile: { id: number, name: string }
   vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null }
   platformSchema: { properties?: Record<string, { title: string, unit: string, minimum: number, maximum: number, multipleOf: number }> } | null

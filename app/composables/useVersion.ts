@@ -1,6 +1,7 @@
+import type { SettingValues } from '~~/shared/compute/parameter-input'
 import type { VersionDiff, VersionView } from '~~/shared/schemas/profile-views'
 
-export interface DraftChanges { lockVersion: number, parameters?: Record<string, number>, rationale?: string }
+export interface DraftChanges { lockVersion: number, parameters?: SettingValues, rationale?: string }
 
 // One version (the tune sheet) and what its author and reviewers can do with it.
 export function useVersion(id: MaybeRefOrGetter<number>) {

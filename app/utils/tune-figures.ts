@@ -22,8 +22,9 @@ export function figureRows(e: Evaluation, spec: VehicleSpec, parameters: Record<
   const grip = f.regenGripLimitMs2
   const row = (key: FigureName | string, group: string, label: string, value: string, detail?: string): FigureRow =>
     ({ key, group, label, value, detail, reason: value.startsWith('—') ? why(key as FigureName) : undefined })
-  const cap = num(parameters.powerCapKw)
-  const controllerA = num(parameters.batteryDischargeLimitA)
+  // The role values in their own units, whatever units the drive unit's settings are in.
+  const cap = num(e.roles?.powerCapKw ?? parameters.powerCapKw)
+  const controllerA = num(e.roles?.batteryDischargeLimitA ?? parameters.batteryDischargeLimitA)
   return [
     row('zeroTo50S', 'Performance', '0–50 km/h', f.zeroTo50S === null ? '—' : `${formatFigure(f.zeroTo50S, 1)} s`),
     row('zeroTo100S', 'Performance', '0–100 km/h', f.zeroTo100S === null ? '—' : `${formatFigure(f.zeroTo100S, 1)} s`),

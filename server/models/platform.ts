@@ -6,6 +6,7 @@ export class Platform extends Model<InferAttributes<Platform>, InferCreationAttr
   declare key: string
   declare name: string
   declare motorMaxRpm: number
+  declare torqueConstantNmPerA: CreationOptional<number | null>
   declare schema: Record<string, unknown>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
@@ -17,6 +18,7 @@ export class Platform extends Model<InferAttributes<Platform>, InferCreationAttr
       key: { type: DataTypes.TEXT, allowNull: false },
       name: { type: DataTypes.TEXT, allowNull: false },
       motorMaxRpm: { type: DataTypes.INTEGER, allowNull: false },
+      torqueConstantNmPerA: { type: DataTypes.DOUBLE, allowNull: true },
       schema: { type: DataTypes.JSONB, allowNull: false },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE

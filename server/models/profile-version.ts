@@ -1,3 +1,4 @@
+import type { SettingValues } from '../../shared/compute/parameter-input'
 import { Model, DataTypes, type Sequelize, type InferAttributes, type InferCreationAttributes, type CreationOptional, type NonAttribute } from 'sequelize'
 import type { VersionState, VersionOrigin } from '../../shared/schemas/version'
 import type { Profile } from './profile'
@@ -9,7 +10,7 @@ export class ProfileVersion extends Model<InferAttributes<ProfileVersion>, Infer
   declare profileId: number
   declare versionNo: number
   declare parentVersionId: number | null
-  declare parameters: Record<string, number>
+  declare parameters: SettingValues
   declare rationale: CreationOptional<string>
   declare authorId: number
   declare state: CreationOptional<VersionState>

@@ -1,3 +1,4 @@
+import type { SettingValues } from '../../shared/compute/parameter-input'
 import { Model, DataTypes, type Sequelize, type InferAttributes, type InferCreationAttributes, type CreationOptional, type NonAttribute } from 'sequelize'
 import type { ReadbackSource } from '../../shared/schemas/readback'
 import type { Profile } from './profile'
@@ -11,9 +12,9 @@ export class Readback extends Model<InferAttributes<Readback>, InferCreationAttr
   declare vehicleId: number
   declare profileId: number
   declare versionId: number | null
-  declare parameters: Record<string, number>
+  declare parameters: SettingValues
   declare matches: boolean
-  declare differences: CreationOptional<{ parameter: string, expected: number | null, found: number | null }[]>
+  declare differences: CreationOptional<{ parameter: string, expected: unknown, found: unknown }[]>
   declare recordedById: number
   declare source: CreationOptional<ReadbackSource>
   declare readAt: CreationOptional<Date | null>

@@ -1,7 +1,8 @@
 // Turns a spec, parameters and settings into the physical model the figures are computed from.
 import type { VehicleSpec } from '../schemas/vehicle-spec'
 import type { CarModel } from './acceleration'
-import type { Parameters } from './parameters'
+import { numbersFor } from './role-needs'
+import type { RoleValues } from './roles'
 import type { RegenDrive } from './regen'
 import type { WorkshopSettings } from './settings'
 import type { Chassis } from './traction'
@@ -16,7 +17,10 @@ export function chassisOf(spec: VehicleSpec): Chassis {
   return { massKg: testMassKg(spec), rearShare: rearShare(spec), cgHeightM: mmToM(spec.cgHeightMm), wheelbaseM: mmToM(spec.wheelbaseMm) }
 }
 
-export function carModel(spec: VehicleSpec, p: Parameters, motorMaxRpm: number, rollingRadiusM: number, settings: WorkshopSettings): CarModel {
+// Null when the controller lacks the torque cap, power cap or speed limit the envelope is drawn from.
+export function carModel(spec: VehicleSpec, values: RoleValues, motorMaxRpm: number, rollingRadiusM: number, settings: WorkshopSettings): CarModel | null {
+  const p = numbersFor(values, ['torqueCapNm', 'powerCapKw', 'speedLimitKph'])
+  if (!p) return null
   const massKg = testMassKg(spec)
   return {
     envelope: {
@@ -36,7 +40,9 @@ export function carModel(spec: VehicleSpec, p: Parameters, motorMaxRpm: number, 
   }
 }
 
-export function regenDrive(spec: VehicleSpec, p: Parameters): RegenDrive {
+export function regenDrive(spec: VehicleSpec, values: RoleValues): RegenDrive | null {
+  const p = numbersFor(values, ['regenTorqueLimitNm', 'batteryChargeLimitA'])
+  if (!p) return null
   return {
     regenTorqueLimitNm: p.regenTorqueLimitNm,
     batteryChargeLimitA: p.batteryChargeLimitA,

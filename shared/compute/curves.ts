@@ -3,8 +3,9 @@ import type { VehicleSpec } from '../schemas/vehicle-spec'
 import type { CarModel } from './acceleration'
 import { regenDrive } from './car-model'
 import { torqueAvailablePct } from './derate'
+import { DERATE_PAIRS } from './parameters'
 import { envelopeForceN, motorRpmSpeedMs, motorSpeedRadS } from './envelope'
-import type { Parameters } from './parameters'
+import type { RoleValues } from './roles'
 import { regenTorqueNm, regenWheelForceN } from './regen'
 import { roadLoadN } from './roadload'
 import type { SpeedCurves, TemperatureCurves } from './types'
@@ -21,9 +22,10 @@ export function emptySpeedCurves(): SpeedCurves {
 }
 
 // From standstill to one step past the lower of speed limit and motor rpm, so the cut-off shows.
-export function speedCurves(car: CarModel, spec: VehicleSpec, p: Parameters): SpeedCurves {
+// Without the regen role values the lift-off series is left empty rather than drawn at zero.
+export function speedCurves(car: CarModel, spec: VehicleSpec, p: RoleValues): SpeedCurves {
   const env = car.envelope
-  const endKph = Math.min(MAX_CHART_KPH, p.speedLimitKph, msToKph(motorRpmSpeedMs(env)))
+  const endKph = Math.min(MAX_CHART_KPH, env.speedLimitKph, msToKph(motorRpmSpeedMs(env)))
   const points = Math.max(1, Math.ceil(finiteOrZero(endKph) / SPEED_STEP_KPH) + 2)
   const out = emptySpeedCurves()
   const drive = regenDrive(spec, p)
@@ -36,22 +38,25 @@ export function speedCurves(car: CarModel, spec: VehicleSpec, p: Parameters): Sp
     out.wheelForceN.push(finiteOrZero(force))
     out.powerKw.push(finiteOrZero((force * v) / 1000))
     out.roadLoadN.push(finiteOrZero(roadLoadN(v, car.road)))
-    out.liftOffRegenForceN.push(finiteOrZero(regenWheelForceN(regenTorqueNm(p.liftOffRegenPct, omega, drive), env.finalDriveRatio, env.rollingRadiusM)))
+    if (drive && p.liftOffRegenPct !== null) {
+      out.liftOffRegenForceN.push(finiteOrZero(regenWheelForceN(regenTorqueNm(p.liftOffRegenPct, omega, drive), env.finalDriveRatio, env.rollingRadiusM)))
+    }
   }
   return out
 }
 
-// From below the lowest derate start (or room temperature) to past the highest cut-off.
-export function temperatureCurves(p: Parameters): TemperatureCurves {
-  const lo = Math.floor(Math.min(20, p.motorDerateStartC, p.inverterDerateStartC, p.batteryDerateStartC) / 5) * 5 - 5
-  const hi = Math.ceil(Math.max(p.motorCutoffC, p.inverterCutoffC, p.batteryCutoffC) / 5) * 5 + 10
-  const step = Math.max(1, Math.ceil((hi - lo) / MAX_TEMPERATURE_POINTS))
+// From below the lowest derate start (or room temperature) to past the highest cut-off; a sensor whose
+// pair the controller lacks gets an empty series.
+export function temperatureCurves(p: RoleValues): TemperatureCurves {
+  const pairs = DERATE_PAIRS.filter(d => p[d.start] !== null && p[d.cutoff] !== null)
   const out: TemperatureCurves = { temperatureC: [], motorTorquePct: [], inverterTorquePct: [], batteryTorquePct: [] }
+  if (pairs.length === 0) return out
+  const lo = Math.floor(Math.min(20, ...pairs.map(d => p[d.start]!)) / 5) * 5 - 5
+  const hi = Math.ceil(Math.max(...pairs.map(d => p[d.cutoff]!)) / 5) * 5 + 10
+  const step = Math.max(1, Math.ceil((hi - lo) / MAX_TEMPERATURE_POINTS))
   for (let t = lo; t <= hi; t += step) {
     out.temperatureC.push(t)
-    out.motorTorquePct.push(torqueAvailablePct(t, p.motorDerateStartC, p.motorCutoffC))
-    out.inverterTorquePct.push(torqueAvailablePct(t, p.inverterDerateStartC, p.inverterCutoffC))
-    out.batteryTorquePct.push(torqueAvailablePct(t, p.batteryDerateStartC, p.batteryCutoffC))
+    for (const d of pairs) out[`${d.sensor}TorquePct`].push(torqueAvailablePct(t, p[d.start]!, p[d.cutoff]!))
   }
   return out
 }

@@ -4,7 +4,8 @@ import { carModel } from './car-model'
 import { emptySpeedCurves, speedCurves, temperatureCurves } from './curves'
 import { computeFigures } from './figures'
 import { scrubFigures } from './finite'
-import { readParameters } from './parameter-input'
+import { derateOrderErrors, readParameters } from './parameter-input'
+import { roleSettings, roleValues, ROLES, type Role } from './roles'
 import { runRules } from './rules/index'
 import { defaultSettings, workshopSettingsSchema, type WorkshopSettings, type WorkshopSettingsInput } from './settings'
 import { readSpec } from './spec-input'
@@ -17,23 +18,26 @@ export function evaluate(spec: VehicleSpec, platform: PlatformLike, parameters: 
   const read = readSpec(spec)
   const tyres = readTyres(read.spec)
   const params = readParameters(platform, parameters)
+  const roles = roleValues(platform?.schema, params.values, { torqueConstantNmPerA: platform?.torqueConstantNmPerA })
+  const values = roles.values
   const motorMaxRpm = readMotorMaxRpm(platform)
-  const errors = [...s.errors, ...read.errors, ...tyres.errors, ...motorMaxRpm.errors, ...params.errors]
-  const inputs = { spec: read.spec, parameters: params.values, motorMaxRpm: motorMaxRpm.value, settings: s.settings, tyres: tyres.tyres }
+  const errors = [...s.errors, ...read.errors, ...tyres.errors, ...motorMaxRpm.errors, ...params.errors, ...roles.problems,
+    ...derateOrderErrors(values, roleSettingNames(platform?.schema))]
+  const inputs = { spec: read.spec, parameters: values, missing: roles.missing, motorMaxRpm: motorMaxRpm.value, settings: s.settings, tyres: tyres.tyres }
   const { figures, nullReasons } = computeFigures(inputs)
   scrubFigures(figures, nullReasons)
-  const warnings = runRules({ figures, parameters: params.values, spec: read.spec, settings: s.settings })
+  const warnings = runRules({ figures, parameters: values, missing: roles.missing, spec: read.spec, settings: s.settings })
   const driven = tyres.tyres.driven
-  const speed = driven
-    ? speedCurves(carModel(read.spec, params.values, motorMaxRpm.value, rollingRadiusM(overallDiameterMm(driven)), s.settings), read.spec, params.values)
-    : emptySpeedCurves()
+  const car = driven ? carModel(read.spec, values, motorMaxRpm.value, rollingRadiusM(overallDiameterMm(driven)), s.settings) : null
+  const speed = car ? speedCurves(car, read.spec, values) : emptySpeedCurves()
   return {
     valid: errors.length === 0,
     errors,
     warnings,
     figures,
     nullReasons,
-    curves: { speed, temperature: temperatureCurves(params.values) }
+    roles: values,
+    curves: { speed, temperature: temperatureCurves(values) }
   }
 }
 
@@ -51,4 +55,9 @@ function readMotorMaxRpm(platform: PlatformLike): { value: number, errors: Evalu
   const rpm = platform?.motorMaxRpm
   if (typeof rpm === 'number' && Number.isFinite(rpm) && rpm > 0) return { value: rpm, errors: [] }
   return { value: Number.POSITIVE_INFINITY, errors: [{ path: 'platform.motorMaxRpm', message: `The ${platform?.name ?? 'platform'} needs a motor speed limit above 0 rpm` }] }
+}
+
+// Role value name → the schema's setting name, so an error points at the setting the tuner sees.
+function roleSettingNames(schema: unknown): Record<string, string> {
+  return Object.fromEntries(Object.entries(roleSettings(schema)).map(([role, name]) => [ROLES[role as Role].field, name]))
 }

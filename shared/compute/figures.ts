@@ -5,7 +5,8 @@ import { carModel, chassisOf, regenDrive, testMassKg } from './car-model'
 import { chargeTime10to80H, peakDischargeCurrentA } from './currents'
 import { motorSpeedRadS, wheelForceN } from './envelope'
 import { startGrade } from './hill'
-import type { Parameters } from './parameters'
+import { nullAbsentFigures } from './role-needs'
+import type { Role, RoleValues } from './roles'
 import { regenDecelMs2, regenGripLimitMs2, regenTorqueNm, regenWheelForceN, REGEN_REFERENCE_KPH } from './regen'
 import type { WorkshopSettings } from './settings'
 import type { CarTyres } from './tyre-input'
@@ -15,7 +16,8 @@ import { kphToMs } from './units'
 
 export interface FigureInputs {
   spec: VehicleSpec
-  parameters: Parameters
+  parameters: RoleValues
+  missing: readonly Role[] // roles the controller has no setting for
   motorMaxRpm: number
   settings: WorkshopSettings
   tyres: CarTyres
@@ -36,9 +38,9 @@ export function computeFigures(x: FigureInputs): { figures: Figures, nullReasons
     testMassKg: m,
     ...driven.values,
     regenGripLimitMs2: { dry: grip(settings.friction.dry), wet: grip(settings.friction.wet), snow: grip(settings.friction.snow) },
-    peakDischargeCurrentA: peakDischargeCurrentA(p.powerCapKw, spec.drivetrainEfficiency, spec.packNominalVoltageV),
+    peakDischargeCurrentA: p.powerCapKw === null ? null : peakDischargeCurrentA(p.powerCapKw, spec.drivetrainEfficiency, spec.packNominalVoltageV),
     chargeTime10to80H: chargeTime10to80H(spec.packCapacityKwh, spec.chargerPowerKw),
-    powerRatioToOriginal: p.powerCapKw / spec.originalEnginePowerKw,
+    powerRatioToOriginal: p.powerCapKw === null ? null : p.powerCapKw / spec.originalEnginePowerKw,
     tyreLoadPerTyreKg: { front: perTyre(1 - chassis.rearShare), rear: perTyre(chassis.rearShare) },
     tyreLoadCapacityKg: {
       front: x.tyres.front ? tyreLoadCapacityKg(x.tyres.front) : null,
@@ -46,7 +48,9 @@ export function computeFigures(x: FigureInputs): { figures: Figures, nullReasons
     },
     tyreSpeedRatingKph: x.tyres.front && x.tyres.rear ? lowest(tyreSpeedRatingKph(x.tyres.front), tyreSpeedRatingKph(x.tyres.rear)) : null
   }
-  return { figures, nullReasons: { ...driven.reasons, ...tyreReasons(x, figures) } }
+  const nullReasons = { ...driven.reasons, ...tyreReasons(x, figures) }
+  nullAbsentFigures(figures as unknown as Record<string, unknown>, nullReasons, p, x.missing)
+  return { figures, nullReasons }
 }
 
 type DrivenTyreFigures = Pick<Figures, 'tyreDiameterMm' | 'rollingRadiusM' | 'maxWheelForceN' | 'zeroTo50S' | 'zeroTo100S' | 'topSpeedKph'
@@ -64,27 +68,34 @@ function drivenTyreFigures(x: FigureInputs): { values: DrivenTyreFigures, reason
   const diameter = overallDiameterMm(x.tyres.driven)
   const r = rollingRadiusM(diameter)
   const car = carModel(spec, p, x.motorMaxRpm, r, x.settings)
-  const hill = { chassis: car.chassis, axle: car.axle, rollingResistanceCoeff: spec.rollingResistanceCoeff, mu: car.mu }
-  const pull = (torqueNm: number) => wheelForceN(torqueNm, spec.finalDriveRatio, spec.drivetrainEfficiency, r)
-  const start = startGrade({ ...hill, wheelForceN: pull(p.torqueCapNm) })
-  const accel = analyseAcceleration(car)
+  const hill = { chassis: chassisOf(spec), axle: spec.drivenAxle, rollingResistanceCoeff: spec.rollingResistanceCoeff, mu: x.settings.friction.dry }
+  const pull = (torqueNm: number | null) => torqueNm === null ? null : wheelForceN(torqueNm, spec.finalDriveRatio, spec.drivetrainEfficiency, r)
+  const grade = (torqueNm: number | null) => {
+    const force = pull(torqueNm)
+    return force === null ? null : startGrade({ ...hill, wheelForceN: force })
+  }
+  const start = grade(p.torqueCapNm)
+  const accel = car ? analyseAcceleration(car) : null
   const omega = motorSpeedRadS(kphToMs(REGEN_REFERENCE_KPH), spec.finalDriveRatio, r)
-  const regenDecel = (pct: number) => regenDecelMs2(regenWheelForceN(regenTorqueNm(pct, omega, regenDrive(spec, p)), spec.finalDriveRatio, r), testMassKg(spec))
+  const drive = regenDrive(spec, p)
+  const regenDecel = (pct: number | null) => drive === null || pct === null
+    ? null
+    : regenDecelMs2(regenWheelForceN(regenTorqueNm(pct, omega, drive), spec.finalDriveRatio, r), testMassKg(spec))
   const values: DrivenTyreFigures = {
     tyreDiameterMm: diameter,
     rollingRadiusM: r,
     maxWheelForceN: pull(p.torqueCapNm),
-    zeroTo50S: accel.zeroTo50S,
-    zeroTo100S: accel.zeroTo100S,
-    topSpeedKph: accel.topSpeedKph,
-    topSpeedLimitedBy: accel.topSpeedLimitedBy,
-    maxStartGradePct: start.gradePct,
-    startGradeLimitedBy: start.limitedBy,
-    creepHoldGradePct: startGrade({ ...hill, wheelForceN: pull(p.creepTorqueNm) }).gradePct,
+    zeroTo50S: accel?.zeroTo50S ?? null,
+    zeroTo100S: accel?.zeroTo100S ?? null,
+    topSpeedKph: accel?.topSpeedKph ?? null,
+    topSpeedLimitedBy: accel?.topSpeedLimitedBy ?? null,
+    maxStartGradePct: start?.gradePct ?? null,
+    startGradeLimitedBy: start?.limitedBy ?? null,
+    creepHoldGradePct: grade(p.creepTorqueNm)?.gradePct ?? null,
     liftOffDecelMs2: regenDecel(p.liftOffRegenPct),
     brakeRegenDecelMs2: regenDecel(p.brakeRegenPct)
   }
-  return { values, reasons: accel.reasons }
+  return { values, reasons: accel?.reasons ?? {} }
 }
 
 function lowest(a: number | null, b: number | null): number | null {

@@ -1,4 +1,5 @@
-// The controller settings a profile version holds (DESIGN §3); each platform's schema gives their ranges.
+// The role values the computation works with, by the name of each role's quantity in its own unit
+// (powerCapKw in kW, ...); a drive unit's settings map onto them through "x-role" (see ./roles).
 
 export const PARAMETER_NAMES = [
   'powerCapKw',
@@ -26,10 +27,10 @@ export type Parameters = Record<ParameterName, number>
 
 // Derate start and cut-off pairs that must stay in order, one per temperature sensor.
 export const DERATE_PAIRS = [
-  { sensor: 'motor', start: 'motorDerateStartC', cutoff: 'motorCutoffC' },
-  { sensor: 'inverter', start: 'inverterDerateStartC', cutoff: 'inverterCutoffC' },
-  { sensor: 'battery', start: 'batteryDerateStartC', cutoff: 'batteryCutoffC' }
-] as const satisfies readonly { sensor: string, start: ParameterName, cutoff: ParameterName }[]
+  { sensor: 'motor', start: 'motorDerateStartC', cutoff: 'motorCutoffC', roles: ['motorDerateStart', 'motorCutoff'] },
+  { sensor: 'inverter', start: 'inverterDerateStartC', cutoff: 'inverterCutoffC', roles: ['inverterDerateStart', 'inverterCutoff'] },
+  { sensor: 'battery', start: 'batteryDerateStartC', cutoff: 'batteryCutoffC', roles: ['batteryDerateStart', 'batteryCutoff'] }
+] as const satisfies readonly { sensor: string, start: ParameterName, cutoff: ParameterName, roles: readonly string[] }[]
 
 export function isParameterName(name: string): name is ParameterName {
   return (PARAMETER_NAMES as readonly string[]).includes(name)

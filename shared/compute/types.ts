@@ -27,21 +27,39 @@ export interface Warning {
   rule: RuleId
   severity: Severity
   message: string
-  value: number
-  limit: number
+  value: number | null // null when the rule could not be checked
+  limit: number | null
+  unchecked?: true // the controller lacks a setting the rule needs: the road test must cover it
 }
 
-// One parameter as a platform's JSON Schema describes it; `unit` is Voltwright's own keyword.
+// One number setting as a platform's JSON Schema describes it; `unit` and `x-role` are Voltwright's own keywords.
 export interface ParameterProperty {
-  type: 'number'
-  title: string
-  description: string
-  unit: string
-  minimum: number
-  maximum: number
-  multipleOf: number
-  default: number
+  'type': 'number' | 'integer'
+  'title': string
+  'description': string
+  'unit': string
+  'minimum': number
+  'maximum': number
+  'multipleOf': number
+  'default': number
+  'x-role'?: string
 }
+
+// A switch, a choice or a curve (see docs/computation.md, "Settings").
+export interface OtherSettingProperty {
+  'type': 'boolean' | 'string' | 'array'
+  'title': string
+  'description': string
+  'default': unknown
+  'enum'?: string[]
+  'x-enumTitles'?: string[]
+  'items'?: Record<string, unknown>
+  'minItems'?: number
+  'maxItems'?: number
+  'x-monotonic'?: boolean
+}
+
+export type SettingProperty = ParameterProperty | OtherSettingProperty
 
 export interface PlatformSchema {
   $schema: string
@@ -49,7 +67,7 @@ export interface PlatformSchema {
   title?: string
   description?: string
   type: 'object'
-  properties: Record<string, ParameterProperty>
+  properties: Record<string, SettingProperty>
   required: string[]
   additionalProperties?: boolean
 }
@@ -58,6 +76,7 @@ export interface Platform {
   key: string
   name: string
   motorMaxRpm: number
+  torqueConstantNmPerA?: number | null
   schema: PlatformSchema
 }
 
@@ -66,6 +85,7 @@ export interface PlatformLike {
   key: string
   name: string
   motorMaxRpm: number
+  torqueConstantNmPerA?: number | null // N·m per A, for a unit that caps motor current rather than torque
   schema: unknown
 }
 
@@ -125,4 +145,5 @@ export interface Evaluation {
   figures: Figures
   nullReasons: NullReasons
   curves: Curves
+  roles?: Partial<Record<string, number | null>> // the role values in their own units (kW, N·m, %, km/h, °C, A); absent in older snapshots
 }

@@ -1,13 +1,16 @@
 // Server-side JSON Schema tools for platform schemas (ajv compiles code, so not for the browser).
 import Ajv2020, { type ErrorObject, type ValidateFunction } from 'ajv/dist/2020.js'
-import { PARAMETER_NAMES } from '../compute/parameters'
 import type { PlatformLike } from '../compute/types'
 import { JSON_SCHEMA_2020_12 } from './define'
+import { settingsProblems } from './schema-checks'
 
-// Strict mode rejects unknown keywords, so Voltwright's `unit` is declared as one.
+// Strict mode rejects unknown keywords, so Voltwright's own (unit, roles, choice labels, rising curves) are declared.
 export function createAjv(): Ajv2020 {
   const ajv = new Ajv2020({ strict: true, allErrors: true, multipleOfPrecision: 9 })
   ajv.addKeyword({ keyword: 'unit', schemaType: 'string', metaSchema: { type: 'string', minLength: 1 } })
+  ajv.addKeyword({ keyword: 'x-role', schemaType: 'string', metaSchema: { type: 'string' } })
+  ajv.addKeyword({ keyword: 'x-enumTitles', schemaType: 'array', metaSchema: { type: 'array', items: { type: 'string' } } })
+  ajv.addKeyword({ keyword: 'x-monotonic', schemaType: 'boolean', metaSchema: { type: 'boolean' } })
   return ajv
 }
 
@@ -41,20 +44,22 @@ export function describeAjvErrors(errors: ErrorObject[] | null | undefined): str
 
 export interface SchemaCheck { ok: boolean, errors: string[] }
 
-// Against the 2020-12 meta-schema, then Voltwright's own needs: all 18 parameters, each with
-// minimum, maximum, default and unit, in a sensible order; finally a strict compile.
-export function validatePlatformSchema(schema: unknown): SchemaCheck {
+// Against the 2020-12 meta-schema, then Voltwright's own needs (./schema-checks); finally a strict compile.
+// Each problem starts with its JSON pointer into the schema.
+export function validatePlatformSchema(schema: unknown, facts: { torqueConstantNmPerA?: unknown } = {}): SchemaCheck {
   const errors: string[] = []
   if (schema === null || typeof schema !== 'object' || Array.isArray(schema)) return { ok: false, errors: ['The schema must be a JSON object'] }
   const s = schema as Record<string, unknown>
-  if (s.$schema !== JSON_SCHEMA_2020_12) errors.push(`$schema must be "${JSON_SCHEMA_2020_12}"`)
+  if (s.$schema !== JSON_SCHEMA_2020_12) errors.push(`/$schema: must be "${JSON_SCHEMA_2020_12}"`)
   // Against the 2020-12 meta-schema whatever $schema says, so a wrong draft still gets a clear answer.
   const meta = ajv().getSchema(JSON_SCHEMA_2020_12)
   if (meta && !meta(s)) errors.push(...describeAjvErrors(meta.errors).map(e => `Not valid JSON Schema 2020-12: ${e}`))
-  if (s.type !== 'object') errors.push('type must be "object"')
-  const props = (s.properties ?? {}) as Record<string, Record<string, unknown>>
+  if (s.type !== 'object') errors.push('/type: must be "object"')
+  errors.push(...settingsProblems(s, facts))
+  const names = Object.keys((s.properties ?? {}) as object)
   const required = Array.isArray(s.required) ? s.required : []
-  for (const name of PARAMETER_NAMES) errors.push(...parameterProblems(name, props[name], required.includes(name)))
+  const unlisted = names.filter(n => !required.includes(n))
+  if (unlisted.length) errors.push(`/required: must list every setting (missing ${unlisted.slice(0, 5).join(', ')})`)
   if (errors.length === 0) {
     try {
       createAjv().compile(s) // a fresh instance, so trial compiles leave nothing behind
@@ -65,21 +70,6 @@ export function validatePlatformSchema(schema: unknown): SchemaCheck {
   return { ok: errors.length === 0, errors }
 }
 
-function parameterProblems(name: string, p: Record<string, unknown> | undefined, isRequired: boolean): string[] {
-  if (!p || typeof p !== 'object') return [`properties.${name} is missing: every platform needs all ${PARAMETER_NAMES.length} parameters`]
-  const out: string[] = []
-  const num = (k: string) => typeof p[k] === 'number' && Number.isFinite(p[k])
-  if (!isRequired) out.push(`${name} must be listed in required`)
-  if (p.type !== 'number') out.push(`properties.${name}.type must be "number"`)
-  for (const k of ['minimum', 'maximum', 'default']) if (!num(k)) out.push(`properties.${name}.${k} must be a number`)
-  if (typeof p.unit !== 'string' || p.unit === '') out.push(`properties.${name}.unit must name the unit, e.g. "kW"`)
-  if (num('minimum') && num('maximum') && (p.minimum as number) >= (p.maximum as number)) out.push(`properties.${name}: minimum must be below maximum`)
-  if (num('default') && num('minimum') && num('maximum') && ((p.default as number) < (p.minimum as number) || (p.default as number) > (p.maximum as number))) {
-    out.push(`properties.${name}.default must lie between minimum and maximum`)
-  }
-  return out
-}
-
 // A whole platform as an admin might post it.
 export function validatePlatform(platform: unknown): SchemaCheck {
   const p = (platform ?? {}) as Partial<PlatformLike>
@@ -87,6 +77,8 @@ export function validatePlatform(platform: unknown): SchemaCheck {
   if (typeof p.key !== 'string' || !/^[a-z0-9]+(-[a-z0-9]+)*$/.test(p.key)) errors.push('key must be lower-case words joined by hyphens, e.g. "fenlow-45"')
   if (typeof p.name !== 'string' || p.name.trim() === '') errors.push('name is needed')
   if (typeof p.motorMaxRpm !== 'number' || !Number.isFinite(p.motorMaxRpm) || p.motorMaxRpm <= 0) errors.push('motorMaxRpm must be a number of rpm above 0')
-  errors.push(...validatePlatformSchema(p.schema).errors)
+  const k = p.torqueConstantNmPerA
+  if (k !== undefined && k !== null && !(typeof k === 'number' && Number.isFinite(k) && k > 0)) errors.push('torqueConstantNmPerA must be a number of N·m per A above 0')
+  errors.push(...validatePlatformSchema(p.schema, { torqueConstantNmPerA: k }).errors)
   return { ok: errors.length === 0, errors }
 }

@@ -1,3 +1,4 @@
+import type { SettingValues } from '../compute/parameter-input'
 // What the profile, version, diff and worklist routes answer.
 import type { Curves, Evaluation, EvaluationError, Figures, NullReasons, PlatformLike, Warning } from '../compute/types'
 import type { VersionOrigin, VersionState } from './version'
@@ -44,7 +45,7 @@ export interface ProfileView {
 export interface HistoryEntry { id: string, action: string, actor: PersonRef | null, createdAt: string, data: Record<string, unknown> }
 
 export interface VersionView extends Omit<VersionSummary, 'lastReview'> {
-  parameters: Record<string, number>
+  parameters: SettingValues
   justifications: Record<string, string>
   evaluation: EvaluationSnapshot | null
   contentHash: string

@@ -1,10 +1,13 @@
 import { z } from 'zod'
-import { PARAMETER_NAMES } from '../compute/parameters'
 import { RULE_IDS } from '../compute/types'
 
-// A draft may hold values the checks refuse (they show as hard errors and block submission), but only
-// finite numbers for the controller's known settings.
-export const parametersSchema = z.partialRecord(z.enum(PARAMETER_NAMES, { error: 'Not a setting this controller has' }), z.number({ error: 'A number is needed' }))
+// A draft may hold values the drive unit's schema refuses (they show as hard errors and block submission),
+// but only values of the kinds a setting can have: a finite number, on/off, a choice, or a short curve.
+const point = z.object({ x: z.number(), y: z.number() }).strict()
+const settingValue = z.union([z.number(), z.boolean(), z.string().max(40, 'At most 40 characters'), z.array(point).max(64, 'At most 64 points')],
+  { error: 'A number, on/off, a choice or a list of points is needed' })
+export const parametersSchema = z.record(z.string().regex(/^[A-Za-z][A-Za-z0-9]{0,39}$/, 'Not a setting this controller has'), settingValue)
+  .refine(r => Object.keys(r).length <= 100, 'At most 100 settings')
 
 const rationale = z.string().trim().max(4000, 'At most 4000 characters')
 

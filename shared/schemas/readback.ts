@@ -1,3 +1,4 @@
+import type { SettingValues } from '../compute/parameter-input'
 import { z } from 'zod'
 
 // Voltwright's read-back file (docs/readback-format.md): what a car's controller was found to hold.
@@ -5,7 +6,8 @@ export const READBACK_FORMAT = 'voltwright-readback/1'
 
 const parameterValues = z.record(
   z.string().regex(/^[a-zA-Z][a-zA-Z0-9]{0,59}$/, 'A parameter name such as powerCapKw'),
-  z.number({ error: 'A number' }).finite('A finite number')
+  z.union([z.number().finite(), z.boolean(), z.string().max(40), z.array(z.object({ x: z.number().finite(), y: z.number().finite() }).strict()).max(64)],
+    { error: 'A number, true or false, a choice or a list of points' })
 ).refine(p => Object.keys(p).length >= 1, 'At least one parameter').refine(p => Object.keys(p).length <= 64, 'At most 64 parameters')
 
 export const readbackDocumentSchema = z.object({
@@ -32,7 +34,8 @@ export const readbackBodySchema = z.discriminatedUnion('source', [
 ], { error: 'The source: file, paste or typed' })
 export type ReadbackBody = z.output<typeof readbackBodySchema>
 
-export interface ReadbackDifference { parameter: string, expected: number | null, found: number | null }
+// A setting that differs, with its title and both values in words for the screens and the drift mail.
+export interface ReadbackDifference { parameter: string, expected: unknown, found: unknown, label: string, expectedWords: string, foundWords: string }
 
 export interface ReadbackView {
   id: number
@@ -48,4 +51,4 @@ export interface ReadbackView {
   controller: { serial?: string, firmware?: string }
 }
 
-export interface OnCarProfile { profileId: number, name: string, versionId: number, versionNo: number, origin: string, parameters: Record<string, number> }
+export interface OnCarProfile { profileId: number, name: string, versionId: number, versionNo: number, origin: string, parameters: SettingValues }

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { parametersSchema } from './profile'
 
 // A road test as DESIGN §5 gives it: conditions, one verdict per mandatory check with its measured values.
 export const surfaces = ['dry', 'wet', 'snow'] as const
@@ -82,7 +83,7 @@ export const roadTestCreateSchema = z.object({
 export type RoadTestCreate = z.output<typeof roadTestCreateSchema>
 
 export const roadsideVersionSchema = z.object({
-  parameters: z.record(z.string(), z.number()),
+  parameters: parametersSchema,
   rationale: z.string().trim().min(1, 'Say what you changed at the roadside and why').max(4000)
 }).strict()
 export type RoadsideVersionInput = z.output<typeof roadsideVersionSchema>

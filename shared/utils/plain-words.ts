@@ -1,5 +1,9 @@
 // A profile in the owner's words: "power limited to 85 kW (114 hp), gentle lift-off regen, creep off".
+import { schemaProperties } from '../compute/parameter-input'
+import { roleValues } from '../compute/roles'
+import { settingKind } from '../compute/setting-kinds'
 import { kwToHp, kphToMph } from '../compute/units'
+import { settingLabel, settingValueWords } from './setting-words'
 
 // Lift-off deceleration bands from UN Regulation No. 13-H para 5.2.22.4: at or below 0.7 m/s² regen on
 // lift-off must not light the stop lamps, above 1.3 m/s² it must.
@@ -41,4 +45,17 @@ export function describeProfile(parameters: Record<string, number | undefined>, 
 export function describeProfileSentence(parameters: Record<string, number | undefined>, figures: PlainFigures = {}): string {
   const text = describeProfile(parameters, figures).join(', ')
   return text ? `${text[0]!.toUpperCase()}${text.slice(1)}.` : ''
+}
+
+// Any drive unit's settings: the roles read in their own units, then its switches and modes by their titles.
+export function describeSettings(schema: unknown, parameters: Record<string, unknown>, figures: PlainFigures = {}, torqueConstantNmPerA?: number | null): string[] {
+  const roles = roleValues(schema, parameters, { torqueConstantNmPerA })
+  const known = Object.fromEntries(Object.entries(roles.values).filter(([, v]) => v !== null)) as Record<string, number>
+  const extra = Object.entries(schemaProperties(schema)).flatMap(([name, p]) => {
+    const kind = settingKind(p)
+    if ((kind !== 'boolean' && kind !== 'enumeration') || parameters[name] === undefined) return []
+    const title = settingLabel(p, name).toLowerCase()
+    return [kind === 'boolean' ? `${title} ${parameters[name] ? 'on' : 'off'}` : `${title}: ${settingValueWords(p, parameters[name]).toLowerCase()}`]
+  })
+  return [...describeProfile(known, figures), ...extra]
 }

@@ -20,7 +20,7 @@ describe('the shape of an evaluation (DESIGN §4)', () => {
   const e = run()
 
   it('has exactly the top-level keys and figure names of the contract', () => {
-    expect(Object.keys(e).sort()).toEqual(['curves', 'errors', 'figures', 'nullReasons', 'valid', 'warnings'])
+    expect(Object.keys(e).sort()).toEqual(['curves', 'errors', 'figures', 'nullReasons', 'roles', 'valid', 'warnings'])
     expect(Object.keys(e.figures)).toEqual(FIGURE_NAMES)
     expect(Object.keys(e.figures.regenGripLimitMs2)).toEqual(['dry', 'wet', 'snow'])
     expect(Object.keys(e.figures.tyreLoadPerTyreKg)).toEqual(['front', 'rear'])

@@ -1,12 +1,11 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { evaluate } from '../../shared/compute/evaluate'
-import { PARAMETER_NAMES } from '../../shared/compute/parameters'
 import { DEFER } from '../../shared/compute/rules/index'
 import { workshopSettingsSchema } from '../../shared/compute/settings'
-import type { Evaluation, Platform } from '../../shared/compute/types'
+import type { Evaluation, ParameterProperty, Platform } from '../../shared/compute/types'
 import { vehicleSpecSchema, type VehicleSpec } from '../../shared/schemas/vehicle-spec'
-import { platforms } from '../../shared/platforms/index'
+import { defaultParameters, platforms } from '../../shared/platforms/index'
 
 const num = (min: number, max: number, minExcluded = false) => fc.double({ min, max, minExcluded, noNaN: true, noDefaultInfinity: true })
 const pos = (max: number) => num(0, max, true)
@@ -45,7 +44,10 @@ const spec: fc.Arbitrary<VehicleSpec> = fc.record({
 }, { requiredKeys: [...REQUIRED] })
 
 // Every parameter anywhere within the platform schema's minimum and maximum.
-const parametersFor = (p: Platform) => fc.record(Object.fromEntries(PARAMETER_NAMES.map(n => [n, num(p.schema.properties[n]!.minimum, p.schema.properties[n]!.maximum)])))
+// Settings that are not numbers stay at their defaults.
+const numberSettings = (p: Platform) => Object.entries(p.schema.properties).filter(([, s]) => s.type === 'number') as [string, ParameterProperty][]
+const parametersFor = (p: Platform) => fc.record(Object.fromEntries(numberSettings(p).map(([n, s]) => [n, num(s.minimum, s.maximum)])))
+  .map(values => ({ ...defaultParameters(p), ...values }))
 
 const friction = fc.tuple(num(0.3, 1.2), num(0.1, 1), num(0.05, 0.5)).map(([a, b, c]) => {
   const [dry, wet, snow] = [a, b, c].sort((x, y) => y - x) as [number, number, number]

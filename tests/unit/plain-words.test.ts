@@ -32,3 +32,15 @@ describe('a profile in the owner\'s words', () => {
     expect(describeProfileSentence({})).toBe('')
   })
 })
+
+describe('any drive unit in the owner\'s words', () => {
+  it('reads the roles in their own units, then switches and modes by their titles', async () => {
+    const { describeSettings } = await import('../../shared/utils/plain-words')
+    const { defaultParameters, peltry70, quennel95 } = await import('../../shared/platforms/index')
+    // 75 hp × 745.699872 W = 55.9 kW (NIST SP 811); 80 mph × 1.609344 = 128.7 km/h
+    expect(describeSettings(peltry70.schema, defaultParameters(peltry70)).slice(0, 2)).toEqual(['power limited to 56 kW (75 hp)', 'top speed limited to 129 km/h (80 mph)'])
+    const q = describeSettings(quennel95.schema, { ...defaultParameters(quennel95), driveMode: 'sport' })
+    expect(q).toEqual(expect.arrayContaining(['hill hold on', 'drive mode: sport']))
+    expect(q.some(w => w.includes('creep'))).toBe(false)
+  })
+})

@@ -6,16 +6,58 @@ const clone = <T>(x: T): T => structuredClone(x)
 
 describe('validatePlatformSchema', () => {
   it.each(platforms.map(p => [p.key, p] as const))('accepts the %s schema', (_key, p) => {
-    expect(validatePlatformSchema(p.schema)).toEqual({ ok: true, errors: [] })
+    expect(validatePlatformSchema(p.schema, { torqueConstantNmPerA: p.torqueConstantNmPerA })).toEqual({ ok: true, errors: [] })
   })
 
-  it('names a missing parameter', () => {
+  it('accepts a unit without a setting the physics knows, and names a setting left out of required', () => {
     const s = clone(fenlow45.schema)
     delete (s.properties as Record<string, unknown>).creepTorqueNm
-    s.required = s.required.filter(n => n !== 'creepTorqueNm')
+    s.required = s.required.filter(n => n !== 'creepTorqueNm' && n !== 'creepSpeedKph')
+    expect(validatePlatformSchema(s).errors).toEqual(['/required: must list every setting (missing creepSpeedKph)'])
+    s.required.push('creepSpeedKph')
+    expect(validatePlatformSchema(s)).toEqual({ ok: true, errors: [] })
+  })
+
+  it('names an unknown role, a repeated role and a unit that does not convert, each with its JSON pointer', () => {
+    const s = clone(fenlow45.schema) as unknown as { properties: Record<string, Record<string, unknown>> }
+    s.properties.creepTorqueNm!['x-role'] = 'launchControl'
+    s.properties.creepSpeedKph!['x-role'] = 'speedLimit'
+    s.properties.powerCapKw!.unit = 'km/h'
+    s.properties.motorCutoffC!.unit = 'furlongs'
     const r = validatePlatformSchema(s)
-    expect(r.ok).toBe(false)
-    expect(r.errors).toContain('properties.creepTorqueNm is missing: every platform needs all 18 parameters')
+    expect(r.errors).toEqual([
+      '/properties/powerCapKw/unit: km/h does not convert to power (it is a speed)',
+      '/properties/creepTorqueNm/x-role: "launchControl" is not a role Voltwright knows',
+      '/properties/speedLimitKph/x-role: the speed limit is already given by /properties/creepSpeedKph',
+      '/properties/motorCutoffC/unit: furlongs does not convert to temperature'
+    ])
+  })
+
+  it('a motor current stands for torque only with the drive unit\'s torque constant', () => {
+    const s = clone(fenlow45.schema) as unknown as { properties: Record<string, Record<string, unknown>> }
+    s.properties.torqueCapNm = { ...s.properties.torqueCapNm, unit: 'A', maximum: 300, default: 200 }
+    expect(validatePlatformSchema(s).errors).toEqual(['/properties/torqueCapNm/unit: a motor current in A needs the drive unit\'s torque constant (N·m per A)'])
+    expect(validatePlatformSchema(s, { torqueConstantNmPerA: 0.7 }).ok).toBe(true)
+    expect(validatePlatform({ key: 'amps', name: 'Amps', motorMaxRpm: 9000, torqueConstantNmPerA: -1, schema: s }).errors[0]).toMatch(/torqueConstantNmPerA/)
+  })
+
+  it('checks switches, choices and curves, and their defaults', () => {
+    const s = clone(fenlow45.schema) as unknown as { properties: Record<string, Record<string, unknown>>, required: string[] }
+    s.properties.hillHold = { type: 'boolean', title: 'Hill hold', default: 'yes' }
+    s.properties.mode = { 'type': 'string', 'title': 'Mode', 'enum': ['eco'], 'x-enumTitles': ['Eco', 'Sport'], 'default': 'eco' }
+    s.properties.map = { 'type': 'array', 'title': 'Map', 'maxItems': 500, 'x-monotonic': true, 'items': { type: 'object', properties: { x: { type: 'number', title: 'Pedal', unit: '%', minimum: 0, maximum: 100 } } }, 'default': [] }
+    s.properties.rampMap = { 'type': 'array', 'title': 'Ramp', 'maxItems': 4, 'x-monotonic': true,
+      'items': { type: 'object', properties: { x: { type: 'number', title: 'Pedal', unit: '%', minimum: 0, maximum: 100 }, y: { type: 'number', title: 'Torque', unit: '%', minimum: 0, maximum: 100 } }, required: ['x', 'y'], additionalProperties: false },
+      'default': [{ x: 0, y: 0 }, { x: 50, y: 60 }, { x: 100, y: 40 }] }
+    s.required.push('hillHold', 'mode', 'map', 'rampMap')
+    expect(validatePlatformSchema(s).errors).toEqual([
+      '/properties/hillHold/default: Hill hold must be on or off',
+      '/properties/mode/enum: needs from 2 to 20 choices',
+      '/properties/mode/x-enumTitles: must give one label per choice',
+      '/properties/map/items: a curve\'s points must be objects with x and y',
+      '/properties/map/maxItems: must be from 2 to 64',
+      '/properties/rampMap/default: Ramp must never fall: point 3 is below point 2'
+    ])
   })
 
   it('names a missing maximum, unit or default, and a range upside down', () => {
@@ -26,10 +68,10 @@ describe('validatePlatformSchema', () => {
     s.properties.batteryCutoffC!.minimum = 90
     const r = validatePlatformSchema(s)
     expect(r.errors).toEqual(expect.arrayContaining([
-      'properties.powerCapKw.maximum must be a number',
-      'properties.torqueCapNm.unit must name the unit, e.g. "kW"',
-      'properties.speedLimitKph.default must be a number',
-      'properties.batteryCutoffC: minimum must be below maximum'
+      '/properties/powerCapKw/maximum: must be a number',
+      '/properties/torqueCapNm/unit: must name the unit, e.g. "kW"',
+      '/properties/speedLimitKph/default: a default is needed, the value a new profile starts from',
+      '/properties/batteryCutoffC: minimum must be below maximum'
     ]))
   })
 
@@ -42,7 +84,7 @@ describe('validatePlatformSchema', () => {
   })
 
   it('refuses the wrong draft, a non-object and a keyword strict mode does not know', () => {
-    expect(validatePlatformSchema({ ...fenlow45.schema, $schema: 'http://json-schema.org/draft-07/schema#' }).errors[0]).toMatch(/\$schema must be/)
+    expect(validatePlatformSchema({ ...fenlow45.schema, $schema: 'http://json-schema.org/draft-07/schema#' }).errors[0]).toMatch(/^\/\$schema: must be/)
     expect(validatePlatformSchema('schema').errors).toEqual(['The schema must be a JSON object'])
     const s = clone(fenlow45.schema) as unknown as { properties: Record<string, Record<string, unknown>> }
     s.properties.powerCapKw!.colour = 'copper'

@@ -1,9 +1,11 @@
 import { Op, type Transaction } from 'sequelize'
-import { Profile, ProfileVersion, Readback, User, Vehicle } from '../../models'
+import { Platform, Profile, ProfileVersion, Readback, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { OnCarProfile, ReadbackBody, ReadbackDifference, ReadbackView } from '../../../shared/schemas/readback'
-import { compareReadback } from '../../../shared/utils/readback-compare'
+import { compareReadback, withWords } from '../../../shared/utils/readback-compare'
 import { schemaProperties } from '../../../shared/compute/parameter-input'
+import { settingKind } from '../../../shared/compute/setting-kinds'
+import { settingLabel } from '../../../shared/utils/setting-words'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { queueMail, peopleWithRole, absoluteUrl } from '../mail/outbox'
@@ -18,10 +20,10 @@ export async function onCarProfiles(vehicleId: number): Promise<OnCarProfile[]> 
   })
 }
 
-function readbackView(r: Readback, profile: { id: number, name: string }, versionNo: number | null): ReadbackView {
+function readbackView(r: Readback, profile: { id: number, name: string }, versionNo: number | null, schema?: unknown): ReadbackView {
   return {
     id: r.id, createdAt: r.createdAt.toISOString(), readAt: r.readAt ? r.readAt.toISOString() : null, source: r.source, matches: r.matches,
-    differences: r.differences, profile, versionId: r.versionId, versionNo,
+    differences: r.differences.map(d => withWords(d, schemaProperties(schema))), profile, versionId: r.versionId, versionNo,
     recordedBy: r.recordedBy ? { id: r.recordedBy.id, name: r.recordedBy.name } : null, controller: r.controller
   }
 }
@@ -29,7 +31,7 @@ function readbackView(r: Readback, profile: { id: number, name: string }, versio
 export async function listReadbacks(vehicle: Vehicle, limit = 20) {
   const rows = await Readback.findAll({ where: { vehicleId: vehicle.id }, include: [{ model: User, as: 'recordedBy', attributes: ['id', 'name'] }, { model: Profile, as: 'profile', attributes: ['id', 'name'] }, { model: ProfileVersion, as: 'version', attributes: ['id', 'versionNo'] }], order: [['id', 'DESC']], limit })
   return {
-    items: rows.map(r => readbackView(r, { id: r.profileId, name: r.profile?.name ?? '' }, r.version?.versionNo ?? null)),
+    items: rows.map(r => readbackView(r, { id: r.profileId, name: r.profile?.name ?? '' }, r.version?.versionNo ?? null, vehicle.platform?.schema)),
     onCar: await onCarProfiles(vehicle.id),
     driftedAt: vehicle.driftedAt ? vehicle.driftedAt.toISOString() : null
   }
@@ -48,18 +50,30 @@ async function profileFor(vehicle: Vehicle, body: ReadbackBody) {
   return { profile, version }
 }
 
-function checkParameters(vehicle: Vehicle, found: Record<string, number>, prefix: string) {
+// Every setting read must be one the drive unit has, and of its kind (a number for a number, and so on);
+// a value outside the range is what the controller holds, so it is recorded and shows as a difference.
+function checkParameters(vehicle: Vehicle, found: Record<string, unknown>, prefix: string) {
   const known = schemaProperties(vehicle.platform?.schema)
-  const unknown = Object.keys(found).filter(k => !Object.hasOwn(known, k))
-  if (unknown.length) {
-    const fields = unknown.map(k => ({ path: `${prefix}.${k}`, message: `Not a parameter of the ${vehicle.platform?.name ?? 'car\'s'} drive unit` }))
-    throw createError({ statusCode: 400, message: `Please check: ${fields.map(f => f.path).join(', ')} (not parameters of this drive unit)`, data: { fields } })
+  const fields = Object.entries(found).flatMap(([k, v]) => {
+    if (!Object.hasOwn(known, k)) return [{ path: `${prefix}.${k}`, message: `Not a parameter of the ${vehicle.platform?.name ?? 'car\'s'} drive unit` }]
+    return sameKind(known[k]!, v) ? [] : [{ path: `${prefix}.${k}`, message: `Not a value ${settingLabel(known[k], k)} can hold` }]
+  })
+  if (fields.length) {
+    throw createError({ statusCode: 400, message: `Please check: ${fields.map(f => f.path).join(', ')} (not parameters of this drive unit, or not values they can hold)`, data: { fields } })
   }
-  return Object.fromEntries(Object.entries(known).map(([k, p]) => [k, typeof p.multipleOf === 'number' ? p.multipleOf : 0]))
+  return known
+}
+
+function sameKind(p: Record<string, unknown>, v: unknown): boolean {
+  const kind = settingKind(p)
+  if (kind === 'number' || kind === 'integer') return typeof v === 'number'
+  if (kind === 'boolean') return typeof v === 'boolean'
+  if (kind === 'enumeration') return typeof v === 'string'
+  return Array.isArray(v)
 }
 
 function driftMail(vehicle: Vehicle, profileName: string, versionNo: number, differences: ReadbackDifference[], by: SignedIn) {
-  const lines = differences.map(d => `  ${d.parameter}: signed off ${d.expected ?? '(not set)'}, the controller holds ${d.found ?? '(not read)'}`)
+  const lines = differences.map(d => `  ${d.label}: signed off ${d.expectedWords}, the controller holds ${d.foundWords}`)
   return {
     subject: `Drift on ${vehicle.stockRef}: the controller no longer holds what was signed off`,
     text: [`${by.name} read back the controller of ${vehicle.stockRef} ${vehicle.make} ${vehicle.model}. Profile "${profileName}" differs from its signed-off version ${versionNo}:`, '',
@@ -74,9 +88,9 @@ export async function recordReadback(user: SignedIn, vehicle: Vehicle, body: Rea
     throw fieldError(400, 'document.vehicle', `This read-back is of car ${body.document.vehicle}, not ${vehicle.stockRef}.`)
   }
   const found = body.source === 'typed' ? body.parameters : body.document.parameters
-  const steps = checkParameters(vehicle, found, body.source === 'typed' ? 'parameters' : 'document.parameters')
+  const props = checkParameters(vehicle, found, body.source === 'typed' ? 'parameters' : 'document.parameters')
   const { profile, version } = await profileFor(vehicle, body)
-  const differences = compareReadback(version.parameters, found, steps)
+  const differences = compareReadback(version.parameters, found, props)
   const matches = differences.length === 0
   const readAt = body.source === 'typed' ? body.readAt : body.document.readAt
   const controller = body.source === 'typed' ? {} : body.document.controller ?? {}
@@ -96,7 +110,7 @@ export async function recordReadback(user: SignedIn, vehicle: Vehicle, body: Rea
       const mail = driftMail(car, profile.name, version.versionNo, differences, user)
       await queueMail(t, engineers.map(e => ({ workshopId: vehicle.workshopId, to: e.email, ...mail })))
     }
-    return readbackView(readback, { id: profile.id, name: profile.name }, version.versionNo)
+    return readbackView(readback, { id: profile.id, name: profile.name }, version.versionNo, vehicle.platform?.schema)
   })
 }
 
@@ -116,12 +130,12 @@ export async function clearDrift(t: Transaction, vehicleId: number, cause: { act
 
 // Drifted cars of the workshop, longest-drifted first, each with the read-back that found it.
 export async function listDriftedCars(workshopId: number) {
-  const cars = await Vehicle.findAll({ where: { workshopId, driftedAt: { [Op.ne]: null } }, order: [['driftedAt', 'ASC'], ['id', 'ASC']] })
+  const cars = await Vehicle.findAll({ where: { workshopId, driftedAt: { [Op.ne]: null } }, include: [{ model: Platform, as: 'platform', attributes: ['schema'] }], order: [['driftedAt', 'ASC'], ['id', 'ASC']] })
   const latest = await Promise.all(cars.map(c => Readback.findOne({ where: { vehicleId: c.id, matches: false }, order: [['id', 'DESC']] })))
   return {
     items: cars.map((c, i) => ({
       id: c.id, stockRef: c.stockRef, make: c.make, model: c.model, driftedAt: c.driftedAt!.toISOString(),
-      differences: latest[i]?.differences ?? []
+      differences: (latest[i]?.differences ?? []).map(d => withWords(d, schemaProperties(c.platform?.schema)))
     })),
     total: cars.length
   }

@@ -1,7 +1,7 @@
 import { Op } from 'sequelize'
 import { RoadTest, Snag, Workshop, type Vehicle } from '../../models'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
-import { describeProfile } from '../../../shared/utils/plain-words'
+import { describeSettings } from '../../../shared/utils/plain-words'
 import type { ClientCarView } from '../../../shared/schemas/client-view'
 import { onCarProfiles } from '../fleet/readbacks'
 import { defaultSettings, evaluate, workshopSettingsSchema } from '../../../shared/compute'
@@ -15,7 +15,7 @@ export async function clientCarView(vehicle: Vehicle): Promise<ClientCarView> {
   const settings = parsed.success ? parsed.data : defaultSettings
   const onCar = profiles.map((p) => {
     const figures = vehicle.platform ? evaluate(vehicle.spec, vehicle.platform, p.parameters, settings).figures : {}
-    return { profile: p.name, versionNo: p.versionNo, words: describeProfile(p.parameters, figures) }
+    return { profile: p.name, versionNo: p.versionNo, words: describeSettings(vehicle.platform?.schema, p.parameters, figures, vehicle.platform?.torqueConstantNmPerA) }
   })
   const test = profiles.length
     ? await RoadTest.findOne({ where: { vehicleId: vehicle.id, versionId: { [Op.in]: profiles.map(p => p.versionId) } }, order: [['testedAt', 'DESC']] })

@@ -45,7 +45,7 @@ async function profileSheet(vehicle: Vehicle, profile: Profile, version: Profile
   const tester = (rt as RoadTest & { tester?: User } | null)?.tester?.name ?? ''
   return {
     profileName: profile.name, versionNo: version.versionNo, versionId: version.id, signedOffAt: rt?.signed?.at ?? null,
-    settings: settingLines(version.parameters), figures: figureLines(evaluation, vehicle.spec),
+    settings: settingLines(vehicle.platform!.schema, version.parameters), figures: figureLines(evaluation, vehicle.spec),
     warnings: evaluation.warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message, justification: version.justifications?.[w.rule] ?? null })),
     roadTest: rt ? {
       id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), tester, verdict: rt.verdict,

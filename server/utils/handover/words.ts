@@ -1,5 +1,6 @@
 // The on-car settings and figures in plain words for the car's owner (handover sheet).
-import { kphToMph, kwToHp, type Evaluation } from '../../../shared/compute'
+import { kphToMph, kwToHp, roleSettings, schemaProperties, type Evaluation, type Role, type SettingValues } from '../../../shared/compute'
+import { settingLabel, settingValueWords } from '../../../shared/utils/setting-words'
 import type { HandoverLine } from '../../../shared/schemas/handover'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 
@@ -7,20 +8,25 @@ const n = (x: number | null | undefined, digits = 0) => x === null || x === unde
 const kw = (x: number) => `${n(x, 1)} kW (${n(kwToHp(x))} hp)`
 const kph = (x: number | null) => x === null ? '—' : `${n(x)} km/h (${n(kphToMph(x))} mph)`
 
-export function settingLines(p: Record<string, number>): HandoverLine[] {
-  return [
-    { label: 'Most power', value: kw(p.powerCapKw!), note: 'The most the motor will ever deliver.' },
-    { label: 'Most torque', value: `${n(p.torqueCapNm)} N·m`, note: 'The pull from standstill; it sets how briskly the car moves off.' },
-    { label: 'Top speed set', value: kph(p.speedLimitKph!), note: 'Above this the controller gives no more drive.' },
-    { label: 'Reverse speed set', value: kph(p.reverseSpeedLimitKph!) },
-    { label: 'Lift-off regen', value: `${n(p.liftOffRegenPct)} % of ${n(p.regenTorqueLimitNm)} N·m`, note: 'How strongly the car slows when you lift off the accelerator, like engine braking.' },
-    { label: 'Brake regen', value: `${n(p.brakeRegenPct)} % of ${n(p.regenTorqueLimitNm)} N·m`, note: 'Extra slowing from the motor when you press the brake pedal; the brakes still do the rest.' },
-    { label: 'Creep', value: `${n(p.creepTorqueNm)} N·m up to ${kph(p.creepSpeedKph!)}`, note: 'With both pedals up the car creeps forward gently, like an automatic.' },
-    { label: 'Motor heat protection', value: `fades from ${n(p.motorDerateStartC)} °C, stops at ${n(p.motorCutoffC)} °C`, note: 'When parts run hot the power fades gradually before it stops.' },
-    { label: 'Inverter heat protection', value: `fades from ${n(p.inverterDerateStartC)} °C, stops at ${n(p.inverterCutoffC)} °C` },
-    { label: 'Battery heat protection', value: `fades from ${n(p.batteryDerateStartC)} °C, stops at ${n(p.batteryCutoffC)} °C` },
-    { label: 'Battery currents', value: `draws at most ${n(p.batteryDischargeLimitA)} A, charges by regen at most ${n(p.batteryChargeLimitA)} A` }
-  ]
+// Owner's notes for the settings the physics knows, by role; any other setting is shown by its title alone.
+const ROLE_NOTES: Partial<Record<Role, string>> = {
+  powerCap: 'The most the motor will ever deliver.',
+  torqueCap: 'The pull from standstill; it sets how briskly the car moves off.',
+  speedLimit: 'Above this the controller gives no more drive.',
+  liftOffRegen: 'How strongly the car slows when you lift off the accelerator, like engine braking.',
+  brakeRegen: 'Extra slowing from the motor when you press the brake pedal; the brakes still do the rest.',
+  creepTorque: 'With both pedals up the car creeps forward gently, like an automatic.',
+  motorDerateStart: 'When parts run hot the power fades gradually before it stops.'
+}
+
+// Every setting of the drive unit, in the schema's order, in words.
+export function settingLines(schema: unknown, p: SettingValues): HandoverLine[] {
+  const roles = Object.fromEntries(Object.entries(roleSettings(schema)).map(([role, name]) => [name, role as Role]))
+  return Object.entries(schemaProperties(schema)).map(([name, prop]) => {
+    const note = roles[name] ? ROLE_NOTES[roles[name]] : undefined
+    const line = { label: settingLabel(prop, name), value: settingValueWords(prop, p[name]) }
+    return note ? { ...line, note } : line
+  })
 }
 
 export function figureLines(e: Evaluation, spec: VehicleSpec): HandoverLine[] {

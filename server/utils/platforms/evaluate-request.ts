@@ -8,20 +8,20 @@ import { type SignedIn, requireUser, vehicleScopeSql } from '../guards/guards'
 import { settingsOf, evaluateOnServer } from './evaluation'
 import { findWorkshopPlatform } from './platforms'
 
-interface CarRow { spec: VehicleSpec | null, key: string | null, name: string, motorMaxRpm: number, schema: unknown, settings: Record<string, unknown> | null }
+interface CarRow { spec: VehicleSpec | null, key: string | null, name: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: unknown, settings: Record<string, unknown> | null }
 
 // The workshop's settings and, when asked for, the car with its own drive unit, in one plain query (the tune
 // sheet calls this on every change), the car scoped as requireVehicle scopes it.
 async function loadCarAndSettings(user: SignedIn, vehicleId: number | undefined) {
   const car = vehicleId !== undefined
   const [row] = await useDatabase().query<CarRow>(
-    `SELECT w.settings${car ? ', v.spec, pl.key, pl.name, pl."motorMaxRpm", pl.schema' : ''}
+    `SELECT w.settings${car ? ', v.spec, pl.key, pl.name, pl."motorMaxRpm", pl."torqueConstantNmPerA", pl.schema' : ''}
        FROM workshops w${car ? ` LEFT JOIN vehicles v ON v.id = :vehicleId AND ${vehicleScopeSql(user, 'v')}
        LEFT JOIN platforms pl ON pl.id = v."platformId"` : ''}
       WHERE w.id = :workshopId`,
     { replacements: { workshopId: user.workshopId, vehicleId, userId: user.id }, type: QueryTypes.SELECT })
   if (car && !row?.spec) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
-  const platform: PlatformLike | null = row?.key ? { key: row.key, name: row.name, motorMaxRpm: row.motorMaxRpm, schema: row.schema } : null
+  const platform: PlatformLike | null = row?.key ? { key: row.key, name: row.name, motorMaxRpm: row.motorMaxRpm, torqueConstantNmPerA: row.torqueConstantNmPerA, schema: row.schema } : null
   return { spec: row?.spec ?? null, platform, settings: settingsOf(row) }
 }
 

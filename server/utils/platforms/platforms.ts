@@ -6,10 +6,10 @@ import type { PlatformUpload } from '../../../shared/schemas/platform'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 
-export interface PlatformView { id: number, key: string, name: string, motorMaxRpm: number, schema: Record<string, unknown>, shared: boolean }
+export interface PlatformView { id: number, key: string, name: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: Record<string, unknown>, shared: boolean }
 
 export function platformView(p: Platform): PlatformView {
-  return { id: p.id, key: p.key, name: p.name, motorMaxRpm: p.motorMaxRpm, schema: p.schema, shared: p.workshopId === null }
+  return { id: p.id, key: p.key, name: p.name, motorMaxRpm: p.motorMaxRpm, torqueConstantNmPerA: p.torqueConstantNmPerA ?? null, schema: p.schema, shared: p.workshopId === null }
 }
 
 // Voltwright's own drive units are shared by every workshop; an uploaded one belongs to its workshop.
@@ -29,8 +29,8 @@ export async function createPlatform(admin: SignedIn, input: PlatformUpload): Pr
     if (await findWorkshopPlatform(input.key, admin.workshopId, transaction)) {
       throw createError({ statusCode: 409, message: `A drive unit with the key "${input.key}" already exists; choose another key.`, data: { fields: [{ path: 'key', message: 'Already used' }] } })
     }
-    const p = await Platform.create({ workshopId: admin.workshopId, key: input.key, name: input.name, motorMaxRpm: input.motorMaxRpm, schema: input.schema }, { transaction })
-    await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'platform.created', entityType: 'platform', entityId: p.id, data: { after: { key: p.key, name: p.name, motorMaxRpm: p.motorMaxRpm, schema: p.schema } } })
+    const p = await Platform.create({ workshopId: admin.workshopId, key: input.key, name: input.name, motorMaxRpm: input.motorMaxRpm, torqueConstantNmPerA: input.torqueConstantNmPerA ?? null, schema: input.schema }, { transaction })
+    await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'platform.created', entityType: 'platform', entityId: p.id, data: { after: { key: p.key, name: p.name, motorMaxRpm: p.motorMaxRpm, torqueConstantNmPerA: p.torqueConstantNmPerA, schema: p.schema } } })
     return platformView(p)
   })
 }

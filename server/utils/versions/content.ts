@@ -1,3 +1,4 @@
+import type { SettingValues } from '../../../shared/compute/parameter-input'
 // What a version's hash covers and what its evaluation snapshot keeps; plain functions, shared with the demo seeder.
 import type { Evaluation } from '../../../shared/compute/types'
 import type { EvaluationSnapshot } from '../../../shared/schemas/profile-views'
@@ -9,7 +10,7 @@ export interface VersionContent {
   profileId: number
   versionNo: number
   parentVersionId: number | null
-  parameters: Record<string, number>
+  parameters: SettingValues
   rationale: string
   authorId: number
   origin: VersionOrigin

@@ -1,3 +1,4 @@
+import type { SettingValues } from '../../../shared/compute/parameter-input'
 import type { Transaction } from 'sequelize'
 import { Profile, ProfileVersion, type Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
@@ -19,7 +20,7 @@ function sameNameRace(e: unknown): never {
   throw e
 }
 
-interface NewVersion { parameters: Record<string, number>, rationale: string, parent: ProfileVersion | null, origin: VersionOrigin }
+interface NewVersion { parameters: SettingValues, rationale: string, parent: ProfileVersion | null, origin: VersionOrigin }
 
 // The next number is max + 1, read after the profile row is locked, so concurrent creations queue and
 // never share or skip a number (the database trigger checks the same).

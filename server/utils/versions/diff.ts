@@ -13,7 +13,7 @@ import { figureDiff, warningDiff } from './diff-figures'
 
 interface PairRow {
   id: number, versionNo: number, state: VersionState, parameters: Record<string, number>, profileName: string,
-  vehicleId: number, spec: VehicleSpec, platformKey: string, platformName: string, motorMaxRpm: number, schema: unknown, settings: Record<string, unknown>
+  vehicleId: number, spec: VehicleSpec, platformKey: string, platformName: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: unknown, settings: Record<string, unknown>
 }
 
 // Both versions with their car, drive unit and workshop settings in one plain query (the diff is on the
@@ -21,7 +21,7 @@ interface PairRow {
 async function loadPair(user: SignedIn, aId: number, bId: number) {
   const rows = await useDatabase().query<PairRow>(
     `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", v.spec,
-            pl.key AS "platformKey", pl.name AS "platformName", pl."motorMaxRpm", pl.schema, w.settings
+            pl.key AS "platformKey", pl.name AS "platformName", pl."motorMaxRpm", pl."torqueConstantNmPerA", pl.schema, w.settings
        FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId" JOIN vehicles v ON v.id = p."vehicleId"
        JOIN platforms pl ON pl.id = v."platformId" JOIN workshops w ON w.id = pv."workshopId"
       WHERE pv.id IN (:ids) AND pv."workshopId" = :workshopId`,
@@ -46,7 +46,7 @@ export function parameterRows(a: Record<string, number>, b: Record<string, numbe
   })
 }
 
-const platformOf = (r: PairRow): PlatformLike => ({ key: r.platformKey, name: r.platformName, motorMaxRpm: r.motorMaxRpm, schema: r.schema })
+const platformOf = (r: PairRow): PlatformLike => ({ key: r.platformKey, name: r.platformName, motorMaxRpm: r.motorMaxRpm, torqueConstantNmPerA: r.torqueConstantNmPerA, schema: r.schema })
 const head = (r: PairRow) => ({ id: r.id, versionNo: r.versionNo, profileName: r.profileName, state: r.state, vehicleId: r.vehicleId })
 const side = (r: PairRow, e: Evaluation): VersionSide =>
   ({ versionId: r.id, label: `${r.profileName} v${r.versionNo}`, valid: e.valid, errors: e.errors, warnings: e.warnings, figures: e.figures, curves: e.curves })

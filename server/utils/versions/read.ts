@@ -43,7 +43,7 @@ export async function readVersion(user: SignedIn, id: number): Promise<VersionVi
     onCar: profile.onCarVersionId === v.id,
     profile: { id: profile.id, name: profile.name, onCarVersionId: profile.onCarVersionId },
     vehicle: vehicleView(vehicle),
-    platform: { key: platform.key, name: platform.name, motorMaxRpm: platform.motorMaxRpm, schema: platform.schema },
+    platform: { key: platform.key, name: platform.name, motorMaxRpm: platform.motorMaxRpm, torqueConstantNmPerA: platform.torqueConstantNmPerA ?? null, schema: platform.schema },
     parent: parent ? { id: parent.id, versionNo: parent.versionNo } : null,
     reviews: reviews.map(reviewView),
     history,

@@ -1,13 +1,14 @@
 // What every safety rule is given, and how it words a warning.
 import type { VehicleSpec } from '../../schemas/vehicle-spec'
 import { formatNumber } from '../format'
-import type { Parameters } from '../parameters'
+import type { Role, RoleValues } from '../roles'
 import type { WorkshopSettings } from '../settings'
 import type { Figures, RuleId, Severity, Warning } from '../types'
 
 export interface RuleInput {
   figures: Figures
-  parameters: Parameters
+  parameters: RoleValues // null where the controller lacks the role
+  missing?: readonly Role[]
   spec: VehicleSpec
   settings: WorkshopSettings
 }

@@ -12,6 +12,7 @@ export function derateBand(x: RuleInput): Warning[] {
   for (const pair of DERATE_PAIRS) {
     const start = x.parameters[pair.start]
     const cutoff = x.parameters[pair.cutoff]
+    if (start === null || cutoff === null) continue
     const band = derateBandC(start, cutoff)
     // A band of zero or less is already a hard error on the parameters.
     if (band <= 0 || band >= min) continue

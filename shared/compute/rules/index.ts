@@ -11,6 +11,7 @@ import { regenGripWet } from './regen-grip-wet'
 import { stopLamp } from './stop-lamp'
 import { tyreLoad } from './tyre-load'
 import { tyreSpeed } from './tyre-speed'
+import { uncheckedWarning } from './needs'
 
 export const rules: Readonly<Record<RuleId, Rule>> = {
   'regen-grip-wet': regenGripWet,
@@ -25,8 +26,12 @@ export const rules: Readonly<Record<RuleId, Rule>> = {
   'derate-band': derateBand
 }
 
+// Each rule checks what it can; where a setting it needs is absent it also says it could not be checked.
 export function runRules(x: RuleInput): Warning[] {
-  return Object.values(rules).flatMap(rule => rule(x))
+  return (Object.entries(rules) as [RuleId, Rule][]).flatMap(([id, rule]) => {
+    const unchecked = uncheckedWarning(id, x)
+    return unchecked ? [...rule(x), unchecked] : rule(x)
+  })
 }
 
 export { DEFER, type Rule, type RuleInput } from './context'

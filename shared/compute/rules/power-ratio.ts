@@ -6,7 +6,7 @@ export function powerRatio(x: RuleInput): Warning[] {
   const ratio = x.figures.powerRatioToOriginal
   const { caution, danger } = x.settings.powerRatio
   if (ratio === null || ratio <= caution) return []
-  const power = `${n(x.parameters.powerCapKw)} kW against ${n(x.spec.originalEnginePowerKw)} kW`
+  const power = `${n(x.parameters.powerCapKw ?? ratio * x.spec.originalEnginePowerKw)} kW against ${n(x.spec.originalEnginePowerKw)} kW`
   if (ratio > danger) {
     return [warning('power-ratio', 'danger',
       `The drive unit may deliver ${n(ratio)} times the original engine's power (${power}). The brakes, tyres, suspension, driveshafts and mounts were built for far less and can fade, break or let go under it. Uprate them, or lower the power cap, before the car is driven hard.`,
