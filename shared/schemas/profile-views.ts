@@ -63,9 +63,11 @@ export interface VersionView extends Omit<VersionSummary, 'lastReview'> {
 export interface ParameterDiffRow {
   name: string
   label: string
-  unit: string
-  before: number | null
-  after: number | null
+  unit: string // '' when the two sides give the setting in different units, or it is not a number
+  before: unknown
+  after: unknown
+  beforeText: string // the value in words with its unit: On/Off, a choice's label, a curve's points
+  afterText: string
   change: number | null
   changePct: number | null
   changed: boolean

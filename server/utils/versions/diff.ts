@@ -1,18 +1,20 @@
 import { QueryTypes } from 'sequelize'
 import type { SignedIn } from '../guards/guards'
-import { PARAMETER_NAMES } from '../../../shared/compute/parameters'
-import { schemaProperties } from '../../../shared/compute/parameter-input'
+import { schemaProperties, type SettingValues } from '../../../shared/compute/parameter-input'
 import type { Evaluation, PlatformLike } from '../../../shared/compute/types'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 import type { VersionState } from '../../../shared/schemas/version'
+import type { Op } from 'jsondiffpatch/formatters/jsonpatch'
+import { canonicalJson } from '../../../shared/utils/canonical-json'
 import { jsonPatch } from '../../../shared/utils/json-patch'
+import { settingLabel, settingValueWords } from '../../../shared/utils/setting-words'
 import type { ParameterDiffRow, VersionDiff, VersionSide } from '../../../shared/schemas/profile-views'
 import { useDatabase } from '../database/db'
 import { settingsOf, evaluateOnServer } from '../platforms/evaluation'
-import { figureDiff, warningDiff } from './diff-figures'
+import { figureDiff, numericChange, warningDiff } from './diff-figures'
 
 interface PairRow {
-  id: number, versionNo: number, state: VersionState, parameters: Record<string, number>, profileName: string,
+  id: number, versionNo: number, state: VersionState, parameters: SettingValues, profileName: string,
   vehicleId: number, spec: VehicleSpec, platformKey: string, platformName: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: unknown, settings: Record<string, unknown>
 }
 
@@ -34,16 +36,40 @@ async function loadPair(user: SignedIn, aId: number, bId: number) {
   return { a: pick(aId), b: pick(bId), settings: settingsOf({ settings: rows[0]!.settings }) }
 }
 
-// Each setting with before, after, the change and the change in percent, in the unit of the platform's schema.
-export function parameterRows(a: Record<string, number>, b: Record<string, number>, schemas: unknown[]): ParameterDiffRow[] {
+// Each setting with before and after in words, and for numbers in one unit the change and the change in percent.
+export function parameterRows(a: SettingValues, b: SettingValues, schemas: unknown[], aSchema: unknown = schemas[1]): ParameterDiffRow[] {
   const props = schemas.map(s => schemaProperties(s))
-  const names = [...new Set([...PARAMETER_NAMES, ...props.flatMap(p => Object.keys(p)), ...Object.keys(a), ...Object.keys(b)])]
+  const aProps = schemaProperties(aSchema)
+  const names = [...new Set([...props.flatMap(p => Object.keys(p)), ...Object.keys(a), ...Object.keys(b)])]
   return names.map((name) => {
     const prop = props.map(p => p[name]).find(Boolean)
-    const before = typeof a[name] === 'number' ? a[name] : null
-    const after = typeof b[name] === 'number' ? b[name] : null
-    return { name, label: typeof prop?.title === 'string' ? prop.title : name, unit: typeof prop?.unit === 'string' ? prop.unit : '', before, after, ...numericChange(before, after), changed: before !== after }
+    const before = a[name] ?? null
+    const after = b[name] ?? null
+    const sameUnit = unitOf(aProps[name] ?? prop) === unitOf(prop)
+    const numbers = sameUnit && typeof before === 'number' && typeof after === 'number'
+    return {
+      name, label: settingLabel(prop, name), unit: numbers || (sameUnit && typeof (before ?? after) === 'number') ? unitOf(prop) : '',
+      before, after, beforeText: before === null ? 'not set' : settingValueWords(aProps[name] ?? prop, before), afterText: after === null ? 'not set' : settingValueWords(prop, after),
+      ...(numbers ? numericChange(before, after) : { change: null, changePct: null }),
+      changed: !sameUnit || canonicalJson(before) !== canonicalJson(after)
+    }
   })
+}
+
+const unitOf = (p: Record<string, unknown> | undefined) => typeof p?.unit === 'string' ? p.unit : ''
+
+// RFC 6902 from a's settings to b's. A setting whose unit differs between the two drive units is not the
+// same quantity: it is removed and added, never replaced, so nobody reads 0.3 (fraction) against 30 (%).
+export function settingsPatch(a: SettingValues, b: SettingValues, aSchema: unknown, bSchema: unknown): Op[] {
+  const ap = schemaProperties(aSchema)
+  const bp = schemaProperties(bSchema)
+  const moved = Object.keys(a).filter(n => Object.hasOwn(b, n) && Object.hasOwn(ap, n) && Object.hasOwn(bp, n) && unitOf(ap[n]) !== unitOf(bp[n]))
+  const without = (x: SettingValues) => Object.fromEntries(Object.entries(x).filter(([n]) => !moved.includes(n)))
+  const path = (n: string) => `/${n.replace(/~/g, '~0').replace(/\//g, '~1')}`
+  return [
+    ...jsonPatch(without(a), without(b)),
+    ...moved.flatMap(n => [{ op: 'remove', path: path(n) }, { op: 'add', path: path(n), value: b[n] }] as Op[])
+  ]
 }
 
 const platformOf = (r: PairRow): PlatformLike => ({ key: r.platformKey, name: r.platformName, motorMaxRpm: r.motorMaxRpm, torqueConstantNmPerA: r.torqueConstantNmPerA, schema: r.schema })
@@ -59,10 +85,10 @@ export async function diffVersions(user: SignedIn, aId: number, bId: number): Pr
   return {
     a: head(a),
     b: head(b),
-    rows: parameterRows(a.parameters, b.parameters, [b.schema, a.schema]),
+    rows: parameterRows(a.parameters, b.parameters, [b.schema, a.schema], a.schema),
     figures: figureDiff(ea.figures, eb.figures),
     warnings: warningDiff(ea.warnings, eb.warnings),
-    patch: jsonPatch(a.parameters, b.parameters),
+    patch: settingsPatch(a.parameters, b.parameters, a.schema, b.schema),
     evaluations: { a: side(a, ea), b: side(b, eb) }
   }
 }
