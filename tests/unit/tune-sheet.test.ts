@@ -2,10 +2,10 @@ import { describe, it, expect } from 'vitest'
 import { decelText, hoursText, powerText, secondUnit, speedText } from '../../app/utils/tune-format'
 import { tuneCharts, lineDataset } from '../../app/utils/tune-chart-data'
 import { figureRows } from '../../app/utils/tune-figures'
-import { parameterGroups } from '../../app/utils/tune-groups'
+import { groupSettings, parameterGroups } from '../../app/utils/tune-groups'
 import { ruleTitles } from '../../app/utils/tune-rules'
 import { evaluate, PARAMETER_NAMES, RULE_IDS } from '../../shared/compute'
-import { defaultParameters, fenlow45 } from '../../shared/platforms'
+import { defaultParameters, fenlow45, quennel95 } from '../../shared/platforms'
 import { exampleSpec } from '../../shared/compute/example'
 
 describe('tune sheet numbers', () => {
@@ -81,8 +81,12 @@ describe('tune sheet figures and groups', () => {
   })
 
   it('places every controller setting in exactly one group, and names every rule', () => {
-    const grouped = parameterGroups.flatMap(g => g.names)
+    const grouped = groupSettings(fenlow45.schema.properties as never).flatMap(g => g.names)
     expect([...grouped].sort()).toEqual([...PARAMETER_NAMES].sort())
+    expect(parameterGroups.flatMap(g => g.roles)).toHaveLength(18)
+    const quennel = groupSettings(quennel95.schema.properties as never)
+    expect(quennel.at(-1)).toEqual({ id: 'other', title: 'Other settings', names: ['hillHold', 'driveMode', 'throttleMap'] })
+    expect(quennel.some(g => g.id === 'creep')).toBe(false)
     expect(Object.keys(ruleTitles).sort()).toEqual([...RULE_IDS].sort())
   })
 })
