@@ -41,10 +41,15 @@ export function changePathLabel(path: string, entityType?: string): string {
   return knownChangeLabel(entityType, path) ?? (path.replace(/^\//, '').split('/').map(s => s.replace(/~1/g, '/').replace(/~0/g, '~')).join(' › ') || '(whole record)')
 }
 
+const isPoint = (v: unknown): v is { x: number, y: number } =>
+  v !== null && typeof v === 'object' && typeof (v as { x?: unknown }).x === 'number' && typeof (v as { y?: unknown }).y === 'number' && Object.keys(v).length === 2
+
 export function changeValueText(value: unknown): string {
   if (value === undefined) return '—'
   if (value === null) return 'none'
   if (Array.isArray(value) && value.every(v => typeof v !== 'object')) return value.join(', ') || '(empty)'
+  if (Array.isArray(value) && value.every(isPoint)) return value.map(p => `${p.x} → ${p.y}`).join(', ') || '(no points)'
+  if (isPoint(value)) return `${value.x} → ${value.y}`
   if (typeof value === 'object') return JSON.stringify(value)
   return String(value)
 }

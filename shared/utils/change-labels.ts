@@ -1,6 +1,7 @@
 // The fields a history change names, in the workshop's words: "/spec/kerbMassKg" on a car is
 // "Kerb mass (converted), kg". Paths with no words of their own keep their names, joined by ›.
 import { schemaProperties } from '../compute/parameter-input'
+import { curveAxes } from '../compute/setting-kinds'
 import { settingLimits } from '../compute/settings'
 import { platforms } from '../platforms'
 import { specGroups } from '../schemas/vehicle-spec-fields'
@@ -30,6 +31,18 @@ const snagLabels: Record<string, string> = {
 
 const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels, snag: snagLabels }
 
+// A curve's point of a version's setting: "/parameters/throttleMap/2/y" is "Throttle map, point 3, torque".
+const curveProps = Object.fromEntries(platforms.flatMap(p => Object.entries(schemaProperties(p.schema))).filter(([, p]) => p.type === 'array'))
+
+function pointLabel(path: string): string | undefined {
+  const m = /^\/parameters\/([^/]+)\/(\d+)(?:\/([xy]))?$/.exec(path)
+  const prop = m ? curveProps[m[1]!] : undefined
+  if (!m || !prop) return undefined
+  const axis = m[3] ? curveAxes(prop)[m[3] as 'x' | 'y'] : undefined
+  return `${String(prop.title ?? m[1])}, point ${Number(m[2]) + 1}${axis ? `, ${String(axis.title ?? m[3]).toLowerCase()}` : ''}`
+}
+
 export function knownChangeLabel(entityType: string | undefined, path: string): string | undefined {
-  return entityType ? byEntity[entityType]?.[path] : undefined
+  if (!entityType) return undefined
+  return byEntity[entityType]?.[path] ?? (entityType === 'version' ? pointLabel(path) : undefined)
 }

@@ -39,8 +39,8 @@ describe('drift: read-backs against the signed-off profile', async () => {
     expect(res.status).toBe(201)
     expect(res.body.matches).toBe(false)
     expect(res.body.differences).toEqual([
-      { parameter: 'creepTorqueNm', expected: parameters.creepTorqueNm, found: 0 },
-      { parameter: 'liftOffRegenPct', expected: parameters.liftOffRegenPct, found: 60 }
+      { parameter: 'creepTorqueNm', expected: parameters.creepTorqueNm, found: 0, label: 'Creep torque', expectedWords: `${parameters.creepTorqueNm} N·m`, foundWords: '0 N·m' },
+      { parameter: 'liftOffRegenPct', expected: parameters.liftOffRegenPct, found: 60, label: 'Lift-off regen', expectedWords: `${parameters.liftOffRegenPct} %`, foundWords: '60 %' }
     ])
     const flaggedAt = await drifted()
     expect(new Date(flaggedAt).getTime()).toBeGreaterThanOrEqual(since.getTime() - 1000)

@@ -48,7 +48,7 @@ describe('handover sheet', async () => {
     expect(text).toContain('1967 Łowicz Coupé Särkkä') // latin-ext letters print from the latin-ext face
     expect(text).toContain(car.stockRef)
     expect(text).toContain('Ottoline Marsh')
-    expect(text).toMatch(/Most power\s+80 kW \(107 hp\)/) // 80 kW / 0.74569987 kW per hp = 107.3 hp (NIST SP 811)
+    expect(text).toMatch(/Power cap\s+80 kW \(107 hp\)/) // 80 kW / 0.74569987 kW per hp = 107.3 hp (NIST SP 811)
     expect(text).toContain('Lift-off regen')
     expect(text).toContain('PASSED')
     expect(text).toMatch(/Hill start\s+Pass\s+18 % gradient, 60 mm/)

@@ -72,27 +72,69 @@ describe('drive units', async () => {
     expect(res.body.message).toMatch(/cannot be used/)
     const problems: string[] = res.body.data.problems
     expect(problems.some(p => p.startsWith('Not valid JSON Schema 2020-12'))).toBe(true)
-    expect(problems.some(p => p.includes('properties.powerCapKw.minimum'))).toBe(true)
+    expect(problems.some(p => p.includes('/properties/powerCapKw/minimum'))).toBe(true)
     expect(await stored(key)).toBe(0)
   })
 
-  it('refuses a schema that lacks what Voltwright needs (a setting, a unit, a sane range)', async () => {
+  it('refuses a schema that lacks what Voltwright needs, every problem with its JSON pointer', async () => {
     const key = unique('partial').toLowerCase()
     const upload = goodUpload(key)
     const props = upload.schema.properties as unknown as Record<string, Record<string, unknown>>
     delete props.creepSpeedKph
     delete props.powerCapKw!.unit
     props.torqueCapNm!.minimum = 500
+    props.creepTorqueNm!['x-role'] = 'torqueCap'
+    props.batteryCutoffC!['x-role'] = 'warpFactor'
+    props.speedLimitKph!.unit = 'kW'
     const res = await admin.call('POST', '/api/platforms', upload)
     expect(res.status).toBe(400)
     const problems: string[] = res.body.data.problems
-    expect(problems).toContain('properties.creepSpeedKph is missing: every platform needs all 18 parameters')
-    expect(problems.some(p => p.includes('powerCapKw.unit'))).toBe(true)
-    expect(problems.some(p => p.includes('torqueCapNm: minimum must be below maximum'))).toBe(true)
+    expect(problems).toEqual(expect.arrayContaining([
+      '/properties/powerCapKw/unit: must name the unit, e.g. "kW"',
+      '/properties/torqueCapNm: minimum must be below maximum',
+      '/properties/creepTorqueNm/x-role: the torque cap is already given by /properties/torqueCapNm',
+      '/properties/speedLimitKph/unit: kW does not convert to speed (it is a power)',
+      '/properties/batteryCutoffC/x-role: "warpFactor" is not a role Voltwright knows'
+    ]))
     expect(await stored(key)).toBe(0)
     const notAnObject = await admin.call('POST', '/api/platforms', { ...goodUpload(key), schema: 'not json schema' })
     expect(notAnObject.status).toBe(400)
     expect(notAnObject.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['schema'])
+  })
+
+  it('stores a unit in hp, amps and fractions with its torque constant, and one without creep, and evaluates both', async () => {
+    const key = unique('amps').toLowerCase()
+    const upload = { ...goodUpload(key), torqueConstantNmPerA: 0.8 }
+    const props = upload.schema.properties as unknown as Record<string, Record<string, unknown>>
+    props.torqueCapNm = { ...props.torqueCapNm, unit: 'A', minimum: 20, maximum: 300, default: 175 }
+    props.powerCapKw = { ...props.powerCapKw, unit: 'hp', minimum: 10, maximum: 60, default: 53.5 }
+    props.liftOffRegenPct = { ...props.liftOffRegenPct, unit: 'fraction', minimum: 0, maximum: 1, multipleOf: 0.01, default: 0.15 }
+    const withoutConstant = await admin.call('POST', '/api/platforms', { ...upload, torqueConstantNmPerA: undefined })
+    expect(withoutConstant.body.data.problems).toEqual(['/properties/torqueCapNm/unit: a motor current in A needs the drive unit\'s torque constant (N·m per A)'])
+    const res = await admin.call('POST', '/api/platforms', upload)
+    expect(res.status).toBe(201)
+    expect(res.body.torqueConstantNmPerA).toBe(0.8)
+    const parameters = Object.fromEntries(Object.entries(props).map(([k, p]) => [k, p.default]))
+    const amps = await tuner.call('POST', '/api/evaluate', { spec, platformKey: key, parameters })
+    const metric = await tuner.call('POST', '/api/evaluate', { spec, platformKey: 'fenlow-45', parameters: { ...defaultParameters(fenlow45), torqueCapNm: 140, powerCapKw: 53.5 * 0.745699872, liftOffRegenPct: 15 } })
+    expect(amps.body.errors).toEqual([])
+    // 175 A × 0.8 N·m/A = 140 N·m; 53.5 hp × 745.699872 W (NIST SP 811)
+    expect(amps.body.roles.torqueCapNm).toBeCloseTo(140, 9)
+    expect(amps.body.figures.maxWheelForceN).toBeCloseTo(metric.body.figures.maxWheelForceN, 6)
+    expect(amps.body.figures.zeroTo50S).toBeCloseTo(metric.body.figures.zeroTo50S, 6)
+
+    const noCreep = { ...goodUpload(unique('nocreep').toLowerCase()) }
+    const p2 = noCreep.schema.properties as unknown as Record<string, unknown>
+    delete p2.creepTorqueNm
+    delete p2.creepSpeedKph
+    noCreep.schema.required = noCreep.schema.required.filter(n => !n.startsWith('creep'))
+    expect((await admin.call('POST', '/api/platforms', noCreep)).status).toBe(201)
+    const { creepTorqueNm: _t, creepSpeedKph: _s, ...rest } = defaultParameters(fenlow45)
+    const e = await tuner.call('POST', '/api/evaluate', { spec, platformKey: noCreep.key, parameters: rest })
+    expect(e.body.valid).toBe(true)
+    expect(e.body.figures.creepHoldGradePct).toBeNull()
+    expect(e.body.nullReasons.creepHoldGradePct).toBe('This controller has no creep setting')
+    expect(e.body.warnings.find((w: { rule: string }) => w.rule === 'creep-hold')).toMatchObject({ severity: 'caution', unchecked: true })
   })
 
   it('lets only an admin upload', async () => {

@@ -28,3 +28,14 @@ describe('history field labels', () => {
     expect(detailText('warnings', [])).toBe('(empty)')
   })
 })
+
+describe('settings of the drive units with their own settings', () => {
+  it('names a curve\'s point and shows points, not raw data', async () => {
+    const { knownChangeLabel } = await import('../../shared/utils/change-labels')
+    const { changeValueText } = await import('../../shared/utils/audit-actions')
+    expect(knownChangeLabel('version', '/parameters/throttleMap/2/y')).toBe('Throttle map, point 3, torque')
+    expect(knownChangeLabel('version', '/parameters/hillHold')).toBe('Hill hold')
+    expect(knownChangeLabel('version', '/parameters/powerCapHp')).toBe('Power cap, hp')
+    expect(changeValueText([{ x: 0, y: 0 }, { x: 100, y: 90 }])).toBe('0 → 0, 100 → 90')
+  })
+})
