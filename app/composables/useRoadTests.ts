@@ -1,3 +1,4 @@
+import type { WorkshopCheck } from '~~/shared/schemas/workshop-checks'
 import type { SettingValues } from '~~/shared/compute/parameter-input'
 import type { RoadTestCreate, RoadsideVersionInput } from '~~/shared/schemas/road-test'
 import type { AwaitingRoadTest, RoadTestChart, RoadTestListItem, RoadTestView } from '~~/shared/schemas/road-test-views'
@@ -10,6 +11,7 @@ export interface RoadTestBrief {
   platformSchema: { properties?: Record<string, { title: string, unit: string, minimum: number, maximum: number, multipleOf: number }> } | null
   expected: { maxStartGradePct: number | null, creepHoldGradePct: number | null, liftOffDecelMs2: number | null, brakeRegenDecelMs2: number | null, topSpeedKph: number | null, zeroTo50S: number | null, regenGripLimitMs2: { dry: number | null, wet: number | null, snow: number | null } }
   warnings: { rule: string, severity: Severity, message: string }[]
+  extraChecks: WorkshopCheck[]
 }
 
 export interface SignOffMissing { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }

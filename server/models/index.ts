@@ -15,10 +15,11 @@ import { Snag } from './snag'
 import { Attachment } from './attachment'
 import { TelemetryLog } from './telemetry-log'
 import { Readback } from './readback'
+import { WorkshopCheck } from './workshop-check'
 
-export { Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback }
+export { Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, WorkshopCheck }
 
-const all = [Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback]
+const all = [Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, WorkshopCheck]
 
 export function initModels(sequelize: Sequelize) {
   for (const model of all) model.initModel(sequelize)

@@ -1,3 +1,4 @@
+import type { RecordedCheck } from '../../shared/schemas/workshop-checks'
 import { Model, DataTypes, type Sequelize, type InferAttributes, type InferCreationAttributes, type CreationOptional } from 'sequelize'
 
 export interface RoadTestCheck { key: string, verdict: 'pass' | 'fail' | 'not-tested', values: Record<string, number | string | null>, note: string }
@@ -13,6 +14,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
   declare testedAt: Date
   declare conditions: RoadTestConditions
   declare checks: RoadTestCheck[]
+  declare checkList: CreationOptional<RecordedCheck[]> // the workshop's own checks as they stood when recorded
   declare verdict: 'pass' | 'fail'
   declare signed: CreationOptional<RoadTestSignature | null>
   declare createdAt: CreationOptional<Date>
@@ -28,6 +30,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
       testedAt: { type: DataTypes.DATE, allowNull: false },
       conditions: { type: DataTypes.JSONB, allowNull: false },
       checks: { type: DataTypes.JSONB, allowNull: false },
+      checkList: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       verdict: { type: DataTypes.TEXT, allowNull: false },
       signed: { type: DataTypes.JSONB, allowNull: true },
       createdAt: DataTypes.DATE,

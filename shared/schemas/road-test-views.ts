@@ -1,9 +1,11 @@
 // Road tests as the API answers them.
-import type { CheckKey, CheckVerdict } from './road-test'
+import type { CheckVerdict } from './road-test'
+import type { RecordedCheck } from './workshop-checks'
 import type { TelemetrySummary } from '../telemetry/summary'
 import type { TelemetrySeries } from '../telemetry/downsample'
 
-export interface CheckView { key: CheckKey, verdict: CheckVerdict, values: Record<string, number | string | null>, note: string }
+// A mandatory check by its CheckKey, or one of the workshop's own by the key in the road test's checkList.
+export interface CheckView { key: string, verdict: CheckVerdict, values: Record<string, number | string | null>, note: string }
 export interface AttachmentView { id: number, filename: string, contentType: string, bytes: number, sha256: string, caption: string, hasThumbnail: boolean, createdAt: string }
 export interface TelemetryView { id: number, attachment: AttachmentView, summary: TelemetrySummary, createdAt: string }
 
@@ -16,6 +18,7 @@ export interface RoadTestView {
   testedAt: string
   conditions: { surface: 'dry' | 'wet' | 'snow', ambientC: number, route: string }
   checks: CheckView[]
+  checkList: RecordedCheck[]
   verdict: 'pass' | 'fail'
   signed: { testerId: number, at: string, contentHash: string } | null
   telemetry: TelemetryView[]
@@ -25,7 +28,7 @@ export interface RoadTestView {
 
 export interface RoadTestListItem {
   id: number, testedAt: string, verdict: 'pass' | 'fail', signed: boolean, testerName: string
-  versionId: number, versionNo: number, profileName: string, failedChecks: CheckKey[]
+  versionId: number, versionNo: number, profileName: string, failedChecks: string[] // a mandatory check's key, or an extra check's label
 }
 
 // Measured beside predicted: the model's figures for the tested version against the log and the checks.

@@ -52,6 +52,18 @@ export const roadTestCheckSchema = z.discriminatedUnion('key', [
 ])
 export type RoadTestCheckInput = z.output<typeof roadTestCheckSchema>
 
+// One of the workshop's own checks in a road test's body, beside the six (docs/road-tests.md).
+export const extraCheckResultSchema = z.object({
+  key: z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'Not a check of this workshop').max(60)
+    .refine(k => !(mandatoryCheckKeys as readonly string[]).includes(k), 'Not a check of this workshop'),
+  verdict: z.enum(checkVerdicts, { error: 'Choose pass, fail or not tested' }),
+  values: z.object({ value: z.number().finite().min(-1e6).max(1e6).nullable().optional() }).strict().default({}),
+  note: z.string().trim().max(2000).default('')
+}).strict()
+export type ExtraCheckResult = z.output<typeof extraCheckResultSchema>
+
+const isMandatory = (c: { key: string }): c is RoadTestCheckInput => (mandatoryCheckKeys as readonly string[]).includes(c.key)
+
 export const conditionsSchema = z.object({
   surface: z.enum(surfaces, { error: 'Choose dry, wet or snow' }),
   ambientC: num('Ambient temperature', -40, 55),
@@ -60,7 +72,7 @@ export const conditionsSchema = z.object({
 
 export const roadTestCreateSchema = z.object({
   conditions: conditionsSchema,
-  checks: z.array(roadTestCheckSchema).max(12),
+  checks: z.array(z.union([roadTestCheckSchema, extraCheckResultSchema], { error: 'Not a check of this road test' })).max(72),
   verdict: z.enum(roadTestVerdicts, { error: 'Choose pass or fail' }),
   testedAt: z.coerce.date().optional()
 }).strict().superRefine((rt, ctx) => {
@@ -69,8 +81,12 @@ export const roadTestCreateSchema = z.object({
     if (found.length === 0) ctx.addIssue({ code: 'custom', path: ['checks'], message: `The ${key} check is missing` })
     if (found.length > 1) ctx.addIssue({ code: 'custom', path: ['checks'], message: `The ${key} check is there twice` })
   }
+  const keys = rt.checks.map(c => c.key)
+  keys.forEach((k, i) => {
+    if (keys.indexOf(k) !== i && !isMandatory({ key: k })) ctx.addIssue({ code: 'custom', path: ['checks', i], message: 'This check is there twice' })
+  })
   rt.checks.forEach((c, i) => {
-    if (c.verdict === 'not-tested') return
+    if (c.verdict === 'not-tested' || !isMandatory(c)) return
     for (const v of requiredValues[c.key]) {
       const value = (c.values as Record<string, unknown>)[v]
       if (value === undefined || value === null) ctx.addIssue({ code: 'custom', path: ['checks', i, 'values', v], message: 'Measured value needed' })

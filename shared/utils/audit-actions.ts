@@ -28,7 +28,9 @@ export const auditActionLabels: Record<string, string> = {
   'snag.updated': 'Snag changed',
   'readback.matched': 'Read-back matches the car\'s profile',
   'readback.differs': 'Read-back differs: drift',
-  'platform.created': 'Drive unit added'
+  'platform.created': 'Drive unit added',
+  'workshop-check.created': 'Road-test check added',
+  'workshop-check.changed': 'Road-test check changed'
 }
 
 export function auditActionLabel(action: string): string {

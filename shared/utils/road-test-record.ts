@@ -9,6 +9,7 @@ export interface RoadTestRecordContent {
   testedAt: Date | string
   conditions: unknown
   checks: unknown
+  checkList?: unknown // the workshop's own checks it was recorded with; left out when there were none, as before them
   verdict: string
   telemetry: { summary: unknown, sha256: string | null }[]
   files: { id: number, sha256: string }[]

@@ -9,7 +9,7 @@ import { multipart, upload } from './road-test-fixtures'
 // Demo things looked up at the start of the test; each `[param]` of a route names the one it is called with.
 // signedOff: a signed-off version by tuner@ (so withdrawing it is refused for its state); sibling: another version of its profile;
 // roadTest: a signed road test (so sign-off and uploads are refused for its state).
-export type Fixture = 'car' | 'profile' | 'signedOff' | 'sibling' | 'roadTest' | 'snag' | 'user' | 'platform' | 'attachment'
+export type Fixture = 'car' | 'profile' | 'signedOff' | 'sibling' | 'roadTest' | 'snag' | 'user' | 'platform' | 'attachment' | 'check'
 
 export interface Access {
   roles: readonly Role[]
@@ -91,6 +91,9 @@ export const routeAccess: Record<string, Access> = {
   'worklist/drafts.get.ts': { roles: ['tuner'], foreign: 403 },
   'worklist/reviews.get.ts': { roles: ['engineer'], foreign: 403 },
   'workshop/index.get.ts': { roles: all, foreign: 'allowed' },
+  'workshop/checks/index.get.ts': { roles: staff, foreign: 'allowed' },
+  'workshop/checks/index.post.ts': { roles: ['admin'], foreign: 'allowed' },
+  'workshop/checks/[key].patch.ts': { roles: ['admin'], foreign: 404, params: { key: 'check' }, foreignBody: {} },
   'workshop/settings.patch.ts': { roles: ['admin'], foreign: 'allowed' }
 }
 
@@ -117,6 +120,7 @@ export async function demoFixtures(): Promise<Record<Fixture, string> & { otherC
       snag: await one('SELECT id FROM snags WHERE "workshopId" = $1 ORDER BY id LIMIT 1', [ws]),
       user: String(tuner!.id),
       platform: 'fenlow-45',
+      check: 'heater-demister',
       attachment: await photoOfThrowawaySnag()
     }
   })

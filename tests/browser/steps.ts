@@ -76,12 +76,26 @@ export async function passTheRestAndSave(page: Page, peaks = { motor: '78', inve
   await page.getByLabel(/Peak inverter/).fill(peaks.inverter)
   await page.getByLabel(/Peak battery/).fill(peaks.battery)
   await choose(page, 'Pass')
+  await passWorkshopChecks(page)
   await page.getByRole('button', { name: 'To the verdict' }).click()
   await choose(page, 'Pass')
   await beforeSave?.()
   await page.getByRole('button', { name: 'Save the road test' }).click()
   await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))
   await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toContain('Road test of')
+}
+
+// The workshop's own checks, after the drive checks, when it has any: each passed, a number one measured.
+export async function passWorkshopChecks(page: Page, value = '13.9') {
+  const next = page.getByRole('button', { name: 'To the workshop\'s checks' })
+  if (!(await next.count())) return
+  await next.click()
+  await expect.poll(() => page.getByRole('heading', { name: 'The workshop\'s own checks' }).count()).toBe(1)
+  for (const block of await page.locator('[data-extra-check]').all()) {
+    const measured = block.getByLabel(/Measured/)
+    if (await measured.count()) await measured.fill(value)
+    await block.locator('label', { has: page.getByRole('radio', { name: 'Pass', exact: true }) }).click()
+  }
 }
 
 export async function uploadLog(page: Page, file: string) {

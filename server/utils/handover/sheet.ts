@@ -1,3 +1,4 @@
+import type { RecordedCheck } from '../../../shared/schemas/workshop-checks'
 // Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
@@ -18,6 +19,16 @@ function measured(key: string, values: Record<string, unknown>): string {
   const rank = (k: string) => (order.includes(k) ? order.indexOf(k) : order.length)
   return Object.entries(values ?? {}).sort(([a], [b]) => rank(a) - rank(b)).filter(([, v]) => v !== null && v !== undefined && v !== '')
     .map(([k, v]) => typeof v === 'number' ? `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} ${units[k] ?? k}` : `${k}: ${String(v)}`).join(', ') || '—'
+}
+
+// A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.
+function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
+  const def = list.find(d => d.key === c.key)
+  const value = def && typeof c.values?.value === 'number' ? `${c.values.value.toLocaleString('en-GB', { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
+  return {
+    label: def?.label ?? checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict,
+    measured: def ? value : measured(c.key, c.values), note: c.note
+  }
 }
 
 function logLines(s: TelemetrySummary | undefined) {
@@ -50,7 +61,7 @@ async function profileSheet(vehicle: Vehicle, profile: Profile, version: Profile
     roadTest: rt ? {
       id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), tester, verdict: rt.verdict,
       conditions: `${surfaceLabels[rt.conditions.surface]} road, ${rt.conditions.ambientC} °C${rt.conditions.route ? `, ${rt.conditions.route}` : ''}`,
-      checks: rt.checks.map(c => ({ label: checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict, measured: measured(c.key, c.values), note: c.note })),
+      checks: rt.checks.map(c => checkLine(c, rt.checkList ?? [])),
       log: logLines(log?.summary as TelemetrySummary | undefined)
     } : null,
     people: [

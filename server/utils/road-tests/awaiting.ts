@@ -1,5 +1,6 @@
 // The tester's bench: approved versions awaiting a road test, oldest approval first.
 import { fn, col } from 'sequelize'
+import { checksFor } from '../workshop/checks'
 import { Profile, ProfileVersion, RoadTest, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { AwaitingRoadTest } from '../../../shared/schemas/road-test-views'
@@ -38,6 +39,7 @@ export async function roadTestBrief(user: SignedIn, versionId: number) {
       maxStartGradePct: figures.maxStartGradePct, creepHoldGradePct: figures.creepHoldGradePct, liftOffDecelMs2: figures.liftOffDecelMs2,
       brakeRegenDecelMs2: figures.brakeRegenDecelMs2, topSpeedKph: figures.topSpeedKph, zeroTo50S: figures.zeroTo50S, regenGripLimitMs2: figures.regenGripLimitMs2
     },
-    warnings: warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message }))
+    warnings: warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message })),
+    extraChecks: await checksFor(user.workshopId, vehicle.platform?.key ?? null)
   }
 }

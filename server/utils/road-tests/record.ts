@@ -9,6 +9,8 @@ import type { AttachmentView, RoadTestListItem, RoadTestView } from '../../../sh
 import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
+import { checksFor, recordedCheck } from '../workshop/checks'
+import { requireExtraChecks } from './extra-checks'
 
 export interface TestedVersion { version: ProfileVersion, profile: Profile, vehicle: Vehicle }
 
@@ -37,10 +39,13 @@ export const carLabel = (v: Pick<Vehicle, 'stockRef' | 'year' | 'make' | 'model'
 export async function recordRoadTest(user: SignedIn, versionId: number, input: RoadTestCreate) {
   const { version, vehicle } = await findTestedVersion(user, versionId)
   requireApproved(version, 'road-tested')
+  const defs = await checksFor(user.workshopId, vehicle.platform?.key ?? null)
+  requireExtraChecks(defs, input.checks)
   const id = await useDatabase().transaction(async (transaction) => {
     const rt = await RoadTest.create({
       workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id,
-      testedAt: input.testedAt ?? new Date(), conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict
+      testedAt: input.testedAt ?? new Date(), conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict,
+      checkList: defs.map(recordedCheck)
     }, { transaction })
     // A car on its first road test has moved on from the workshop floor.
     if (vehicle.status === 'intake' || vehicle.status === 'converting') {
@@ -85,7 +90,7 @@ export async function readRoadTest(user: SignedIn, id: number): Promise<RoadTest
     vehicle: { id: vehicle!.id, stockRef: vehicle!.stockRef, make: vehicle!.make, model: vehicle!.model, year: vehicle!.year, status: vehicle!.status },
     tester: { id: tester?.id ?? rt.testerId, name: tester?.name ?? '' },
     testedAt: new Date(rt.testedAt).toISOString(), conditions: rt.conditions, checks: rt.checks as RoadTestView['checks'],
-    verdict: rt.verdict, signed: rt.signed ?? null,
+    checkList: rt.checkList ?? [], verdict: rt.verdict, signed: rt.signed ?? null,
     telemetry: logs.map(l => ({ id: l.id, attachment: attachmentView(files.find(f => f.id === l.attachmentId)!), summary: l.summary as never, createdAt: new Date(l.createdAt).toISOString() })),
     photos: photos.map(attachmentView),
     roadsideVersions: roadside.map(v => ({ id: v.id, versionNo: v.versionNo, state: v.state }))
@@ -102,7 +107,7 @@ export async function listVehicleRoadTests(vehicle: Vehicle): Promise<{ items: R
     return {
       id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), verdict: rt.verdict, signed: Boolean(rt.signed), testerName: r.tester?.name ?? '',
       versionId: rt.versionId, versionNo: r.version?.versionNo ?? 0, profileName: r.version?.profile?.name ?? '',
-      failedChecks: rt.checks.filter(c => c.verdict === 'fail').map(c => c.key) as RoadTestListItem['failedChecks']
+      failedChecks: rt.checks.filter(c => c.verdict === 'fail').map(c => rt.checkList?.find(d => d.key === c.key)?.label ?? c.key)
     }
   })
   return { items, total: items.length }

@@ -23,7 +23,7 @@ export async function roadTestRecordHash(rt: RoadTest, version: ProfileVersion, 
   const files = await Attachment.findAll({ where: { workshopId: rt.workshopId, [Op.or]: [{ ownerType: 'road-test', ownerId: rt.id }, { id: logs.map(l => l.attachmentId) }] }, order: [['id', 'ASC']], transaction })
   return sha256Hex(canonicalJson(roadTestRecordContent({
     roadTestId: rt.id, vehicleId: rt.vehicleId, versionId: version.id, versionContentHash: version.contentHash, testerId: rt.testerId,
-    testedAt: rt.testedAt, conditions: rt.conditions, checks: rt.checks, verdict: rt.verdict,
+    testedAt: rt.testedAt, conditions: rt.conditions, checks: rt.checks, verdict: rt.verdict, ...(rt.checkList?.length ? { checkList: rt.checkList } : {}),
     telemetry: logs.map(l => ({ summary: l.summary, sha256: files.find(f => f.id === l.attachmentId)?.sha256 ?? null })),
     files: files.map(f => ({ id: f.id, sha256: f.sha256 })), signedAt
   })))
