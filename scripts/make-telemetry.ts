@@ -14,11 +14,12 @@ for (const [i, car] of demoCars.entries()) {
   const platform = platforms[car.platformIndex]!
   const spec = vehicleSpecSchema.parse(car.spec)
   const parameters = defaultParameters(platform)
-  const { figures } = evaluate(spec, platform, parameters)
+  const { figures, roles } = evaluate(spec, platform, parameters)
+  const role = (name: 'powerCapKw' | 'torqueCapNm' | 'creepSpeedKph') => roles?.[name] ?? 0 // in the role's own unit
   const samples = syntheticDrive({
     massKg: figures.testMassKg ?? spec.kerbMassKg + 150, rollingRadiusM: figures.rollingRadiusM ?? 0.29, finalDriveRatio: spec.finalDriveRatio,
-    powerCapKw: parameters.powerCapKw, torqueCapNm: parameters.torqueCapNm, liftOffDecelMs2: figures.liftOffDecelMs2 ?? 0.8,
-    brakeRegenDecelMs2: figures.brakeRegenDecelMs2 ?? 1.5, packVoltageV: spec.packNominalVoltageV, creepSpeedKph: parameters.creepSpeedKph
+    powerCapKw: role('powerCapKw'), torqueCapNm: role('torqueCapNm'), liftOffDecelMs2: figures.liftOffDecelMs2 ?? 0.8,
+    brakeRegenDecelMs2: figures.brakeRegenDecelMs2 ?? 1.5, packVoltageV: spec.packNominalVoltageV, creepSpeedKph: role('creepSpeedKph')
   }, { laps: 3, hz: 10, ambientC: 12 + i, rollbackM: 0.04 + 0.02 * i, startGradePct: 12 + 2 * i })
   const file = join(out, `${car.stockRef}-road-test.csv`)
   writeFileSync(file, telemetryCsv(samples))

@@ -29,7 +29,7 @@ export async function awaitingRoadTests(user: SignedIn): Promise<{ items: Awaiti
 
 export async function roadTestBrief(user: SignedIn, versionId: number) {
   const { version, profile, vehicle } = await findTestedVersion(user, versionId)
-  const { figures, warnings } = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(user.workshopId))
+  const { figures, warnings, roles } = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(user.workshopId))
   return {
     version: { id: version.id, versionNo: version.versionNo, state: version.state, authorId: version.authorId, parameters: version.parameters },
     profile: { id: profile.id, name: profile.name },
@@ -37,7 +37,9 @@ export async function roadTestBrief(user: SignedIn, versionId: number) {
     platformSchema: vehicle.platform?.schema ?? null,
     expected: {
       maxStartGradePct: figures.maxStartGradePct, creepHoldGradePct: figures.creepHoldGradePct, liftOffDecelMs2: figures.liftOffDecelMs2,
-      brakeRegenDecelMs2: figures.brakeRegenDecelMs2, topSpeedKph: figures.topSpeedKph, zeroTo50S: figures.zeroTo50S, regenGripLimitMs2: figures.regenGripLimitMs2
+      brakeRegenDecelMs2: figures.brakeRegenDecelMs2, topSpeedKph: figures.topSpeedKph, zeroTo50S: figures.zeroTo50S, regenGripLimitMs2: figures.regenGripLimitMs2,
+      // Derate starts in °C whatever unit the drive unit gives them in; null where it has none.
+      derateStartC: { motor: roles?.motorDerateStartC ?? null, inverter: roles?.inverterDerateStartC ?? null, battery: roles?.batteryDerateStartC ?? null }
     },
     warnings: warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message })),
     extraChecks: await checksFor(user.workshopId, vehicle.platform?.key ?? null)
