@@ -33,7 +33,9 @@ const bodyField: Record<string, [string, Kind]> = {
   'versions/[id]/reject.post.ts': ['comment', 'string'],
   'versions/[id]/road-tests.post.ts': ['verdict', 'string'],
   'versions/[id]/submit.post.ts': ['justifications', 'object'],
-  'workshop/settings.patch.ts': ['minStartGradePct', 'number']
+  'workshop/settings.patch.ts': ['minStartGradePct', 'number'],
+  'workshop/checks/index.post.ts': ['label', 'string'],
+  'workshop/checks/[key].patch.ts': ['required', 'boolean']
 }
 // The query keys each listing or upload reads (shared/schemas/history.ts, vehicle.ts, snag.ts; the routes' own).
 const queryKeys: Record<string, string[]> = {

@@ -50,7 +50,7 @@ describe('drift: read-backs against the signed-off profile', async () => {
     expect(bench.find((c: any) => c.id === car.id)).toMatchObject({ stockRef: car.stockRef, differences: res.body.differences })
     const mail = await withDatabase(async c => (await c.query(`SELECT "to", subject, text FROM mail_outbox WHERE subject LIKE $1 ORDER BY "to"`, [`Drift on ${car.stockRef}%`])).rows)
     expect(mail.map(m => m.to)).toEqual(['engineer@voltwright.test', 'lead@voltwright.test'])
-    expect(mail[0].text).toContain('liftOffRegenPct: signed off 15, the controller holds 60')
+    expect(mail[0].text).toContain('Lift-off regen: signed off 15 %, the controller holds 60 %')
     const event = await withDatabase(async c => (await c.query(`SELECT action, "actorId", data FROM audit_events WHERE "vehicleId" = $1 ORDER BY id DESC LIMIT 1`, [car.id])).rows[0])
     expect(event.action).toBe('readback.differs')
     expect(event.data.patch).toEqual([{ op: 'add', path: '/driftedAt', value: flaggedAt }])

@@ -19,7 +19,8 @@ describe('the diff between two versions', async () => {
     expect(diff.status).toBe(200)
     const power = diff.body.rows.find((r: { name: string }) => r.name === 'powerCapKw')
     // Change in percent = (after − before) / before × 100, worked by hand: (20 − 40) / 40 = −50 %.
-    expect(power).toEqual({ name: 'powerCapKw', label: schema.properties.powerCapKw!.title, unit: 'kW', before: 40, after: 20, change: -20, changePct: -50, changed: true })
+    // 40 kW / 745.699872 W per hp = 53.6 hp; 20 kW = 26.8 hp (NIST SP 811)
+    expect(power).toEqual({ name: 'powerCapKw', label: schema.properties.powerCapKw!.title, unit: 'kW', before: 40, after: 20, beforeText: '40 kW (54 hp)', afterText: '20 kW (27 hp)', change: -20, changePct: -50, changed: true })
     const regen = diff.body.rows.find((r: { name: string }) => r.name === 'liftOffRegenPct')
     expect(regen).toMatchObject({ before: 70, after: 10, change: -60, unit: '%' })
     expect(regen.changePct).toBeCloseTo(-85.714285714, 6)
