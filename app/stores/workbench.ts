@@ -1,6 +1,7 @@
 import { defineStore } from 'pinia'
 import type { Role } from '~~/shared/schemas/roles'
 import { isStaff } from '~~/shared/schemas/roles'
+import { can as roleCan, type Permission } from '~~/shared/utils/permissions'
 
 // The signed-in person's bench: who they are, their workshop, and how they like numbers shown.
 export const useWorkbenchStore = defineStore('workbench', () => {
@@ -9,6 +10,7 @@ export const useWorkbenchStore = defineStore('workbench', () => {
 
   const roles = computed<Role[]>(() => (user.value?.roles ?? []) as Role[])
   const has = (...wanted: Role[]) => roles.value.some(r => wanted.includes(r))
+  const can = (permission: Permission) => roleCan(roles.value, permission)
   const staff = computed(() => isStaff(roles.value))
 
   async function signIn(email: string, password: string) {
@@ -22,5 +24,5 @@ export const useWorkbenchStore = defineStore('workbench', () => {
     await navigateTo('/login')
   }
 
-  return { user, loggedIn, roles, has, staff, speedUnit, signIn, signOut }
+  return { user, loggedIn, roles, has, can, staff, speedUnit, signIn, signOut }
 })
