@@ -15,7 +15,7 @@ export function objectStore(): S3Client {
     forcePathStyle: true,
     // s3rver knows one key pair, S3RVER/S3RVER; production sets real ones (NUXT_S3_ACCESS_KEY_ID, NUXT_S3_SECRET_ACCESS_KEY).
     credentials: { accessKeyId: config.s3AccessKeyId || 'S3RVER', secretAccessKey: config.s3SecretAccessKey || 'S3RVER' },
-    // Without these the SDK frames streamed bodies with checksums that s3rver stores verbatim (PACKAGES.md).
+    // Without these the SDK frames streamed bodies with checksums that s3rver stores verbatim, corrupting the file.
     requestChecksumCalculation: 'WHEN_REQUIRED',
     responseChecksumValidation: 'WHEN_REQUIRED',
     // A store that hangs must not hold a request for ever: give up on a silent connection or socket.
