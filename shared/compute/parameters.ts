@@ -1,5 +1,5 @@
 // The role values the computation works with, by the name of each role's quantity in its own unit
-// (powerCapKw in kW, ...); a drive unit's settings map onto them through "x-role" (see ./roles).
+// (powerCapKw in kW, ...); a drive unit's settings map onto them through "x-role" (docs/computation.md#roles).
 
 export const PARAMETER_NAMES = [
   'powerCapKw',

@@ -2,7 +2,7 @@ import { workshopCheckCreateSchema } from '../../../../shared/schemas/workshop-c
 import { createCheck } from '../../../utils/workshop/checks'
 
 export default defineEventHandler(async (event) => {
-  const admin = await requireRole(event, 'admin')
+  const admin = await requirePermission(event, 'workshop.configure')
   const input = await readValidatedBody(event, zodValidator(workshopCheckCreateSchema))
   setResponseStatus(event, 201)
   return createCheck(admin, input)
