@@ -104,3 +104,22 @@ export function usableValue(raw: unknown, p: LooseProperty): SettingValue {
   }
   return settingProblems(raw, p, '').length === 0 ? raw as SettingValue : fallbackValue(p)
 }
+
+// Whether a value is of the kind a setting holds (a number for a number, and so on), whatever its range.
+export function fitsKind(p: LooseProperty, v: unknown): boolean {
+  const kind = settingKind(p)
+  if (kind === 'number' || kind === 'integer') return finite(v)
+  if (kind === 'boolean') return typeof v === 'boolean'
+  if (kind === 'enumeration') return typeof v === 'string'
+  return Array.isArray(v)
+}
+
+// Settings a drive unit does not have, or values of another kind, as fields for a 400; a value out of range
+// is kept (a draft may hold it; it shows as a hard error and blocks submission).
+export function foreignSettings(schema: unknown, values: Record<string, unknown>, prefix = 'parameters'): { path: string, message: string }[] {
+  const props = ((schema as { properties?: Record<string, LooseProperty> } | null)?.properties ?? {})
+  return Object.entries(values).flatMap(([k, v]) => {
+    if (!Object.hasOwn(props, k)) return [{ path: `${prefix}.${k}`, message: 'Not a setting this controller has' }]
+    return fitsKind(props[k]!, v) ? [] : [{ path: `${prefix}.${k}`, message: `Not a value ${label(props[k], k)} can hold` }]
+  })
+}

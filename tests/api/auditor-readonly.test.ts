@@ -16,7 +16,7 @@ describe('an auditor reads everything and changes nothing', async () => {
   // A real thing of the auditor's own workshop behind each kind of id, so the only reason to refuse is the role.
   const ids: Record<string, string> = {
     'vehicles': String(car.id), 'profiles': String(profileId), 'versions': String(versionId), 'road-tests': String(roadTestId),
-    'snags': String(snagId), 'users': String(await userId('tuner@voltwright.test')), 'platforms': 'fenlow-45'
+    'snags': String(snagId), 'users': String(await userId('tuner@voltwright.test')), 'platforms': 'fenlow-45', 'checks': 'heater-demister'
   }
   const urlFor = (r: Route) => routeUrl(r, (_param, before) => {
     const id = ids[before]

@@ -4,7 +4,7 @@ import type { SignedIn } from '../guards/guards'
 import type { OnCarProfile, ReadbackBody, ReadbackDifference, ReadbackView } from '../../../shared/schemas/readback'
 import { compareReadback, withWords } from '../../../shared/utils/readback-compare'
 import { schemaProperties } from '../../../shared/compute/parameter-input'
-import { settingKind } from '../../../shared/compute/setting-kinds'
+import { fitsKind } from '../../../shared/compute/setting-kinds'
 import { settingLabel } from '../../../shared/utils/setting-words'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
@@ -56,7 +56,7 @@ function checkParameters(vehicle: Vehicle, found: Record<string, unknown>, prefi
   const known = schemaProperties(vehicle.platform?.schema)
   const fields = Object.entries(found).flatMap(([k, v]) => {
     if (!Object.hasOwn(known, k)) return [{ path: `${prefix}.${k}`, message: `Not a parameter of the ${vehicle.platform?.name ?? 'car\'s'} drive unit` }]
-    return sameKind(known[k]!, v) ? [] : [{ path: `${prefix}.${k}`, message: `Not a value ${settingLabel(known[k], k)} can hold` }]
+    return fitsKind(known[k]!, v) ? [] : [{ path: `${prefix}.${k}`, message: `Not a value ${settingLabel(known[k], k)} can hold` }]
   })
   if (fields.length) {
     throw createError({ statusCode: 400, message: `Please check: ${fields.map(f => f.path).join(', ')} (not parameters of this drive unit, or not values they can hold)`, data: { fields } })
@@ -64,13 +64,6 @@ function checkParameters(vehicle: Vehicle, found: Record<string, unknown>, prefi
   return known
 }
 
-function sameKind(p: Record<string, unknown>, v: unknown): boolean {
-  const kind = settingKind(p)
-  if (kind === 'number' || kind === 'integer') return typeof v === 'number'
-  if (kind === 'boolean') return typeof v === 'boolean'
-  if (kind === 'enumeration') return typeof v === 'string'
-  return Array.isArray(v)
-}
 
 function driftMail(vehicle: Vehicle, profileName: string, versionNo: number, differences: ReadbackDifference[], by: SignedIn) {
   const lines = differences.map(d => `  ${d.label}: signed off ${d.expectedWords}, the controller holds ${d.foundWords}`)

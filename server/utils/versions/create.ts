@@ -1,6 +1,7 @@
+import { requireKnownSettings } from './settings-check'
 import type { SettingValues } from '../../../shared/compute/parameter-input'
 import type { Transaction } from 'sequelize'
-import { Profile, ProfileVersion, type Vehicle } from '../../models'
+import { Platform, Profile, ProfileVersion, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import { defaultParameters } from '../../../shared/platforms'
 import { jsonPatch } from '../../../shared/utils/json-patch'
@@ -45,6 +46,7 @@ async function insertVersion(t: Transaction, user: SignedIn, profile: Profile, v
 }
 
 export async function createProfile(user: SignedIn, vehicle: Vehicle, input: ProfileCreate) {
+  requireKnownSettings(vehicle.platform?.schema, input.parameters)
   const parameters = input.parameters ?? defaultParameters(vehicle.platform!)
   const versionId = await useDatabase().transaction(async (t) => {
     const clash = await Profile.findOne({ where: { vehicleId: vehicle.id, name: input.name }, transaction: t })
@@ -61,6 +63,7 @@ export async function createProfile(user: SignedIn, vehicle: Vehicle, input: Pro
 export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate, origin: VersionOrigin = 'workshop') {
   const profile = await Profile.findOne({ where: { id: profileId, workshopId: user.workshopId } })
   if (!profile) throw createError({ statusCode: 404, message: 'No such profile in this workshop.' })
+  if (input.parameters) requireKnownSettings((await Vehicle.findByPk(profile.vehicleId, { include: [{ model: Platform, as: 'platform' }] }))?.platform?.schema, input.parameters)
   const versionId = await useDatabase().transaction(async (t) => {
     const parent = input.fromVersionId
       ? await ProfileVersion.findOne({ where: { id: input.fromVersionId, profileId: profile.id }, transaction: t })
@@ -81,6 +84,7 @@ export async function updateDraft(user: SignedIn, id: number, input: VersionUpda
     const { version: v, vehicle } = await loadVersion(user, id, t)
     if (v.authorId !== user.id) throw createError({ statusCode: 403, message: 'Only the author of a draft can change it; start a new version from it instead.' })
     assertVersionState(v, ['draft'], 'changed')
+    requireKnownSettings(vehicle.platform?.schema, input.parameters)
     if (v.lockVersion !== input.lockVersion) {
       throw createError({
         statusCode: 409,

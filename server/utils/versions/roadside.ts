@@ -1,3 +1,4 @@
+import { requireKnownSettings } from './settings-check'
 // Settings changed at the roadside become a new version (origin roadside, parent the tested version, in
 // review) so they go through four-eyes review like any other. Numbered max+1 with the profile row locked.
 import { QueryTypes } from 'sequelize'
@@ -19,6 +20,7 @@ export async function recordRoadsideVersion(user: SignedIn, roadTestId: number, 
   if (canonicalJson(input.parameters) === canonicalJson(tested!.parameters)) {
     throw createError({ statusCode: 400, message: `These are the settings of version ${tested!.versionNo}: record only what changed at the roadside.`, data: { fields: [{ path: 'parameters', message: 'Nothing changed' }] } })
   }
+  requireKnownSettings(vehicle!.platform?.schema, input.parameters)
   const evaluation = evaluateOnServer(vehicle!.spec, vehicle!.platform!, input.parameters, await loadWorkshopSettings(user.workshopId))
   if (!evaluation.valid) {
     throw createError({ statusCode: 400, message: `Please check: ${evaluation.errors.map(e => `${e.path} (${e.message})`).join('; ')}`.slice(0, 500), data: { fields: evaluation.errors } })
