@@ -4,7 +4,8 @@ import { recordConditions, recordHillStart, recordLiftOff } from './steps'
 import { useRunningServer, signIn, withDatabase } from '../api/helpers'
 import { approvedVersion, newCar, newProfile } from '../api/road-test-fixtures'
 
-describe('a controller with settings of its own, on the tune sheet', async () => {
+// One running server per file: both parts share it.
+describe('any controller, and the workshop\'s own checks', async () => {
   await useRunningServer()
   const carId = await withDatabase(async c => (await c.query(`SELECT id FROM vehicles WHERE "stockRef" = 'OF-107'`)).rows[0].id as number)
   const { context, page } = await launch()
@@ -20,7 +21,7 @@ describe('a controller with settings of its own, on the tune sheet', async () =>
     await page.locator('label', { has: page.getByRole('radio', { name: 'Sport', exact: true }) }).click()
     expect(await page.getByRole('radio', { name: 'Sport', exact: true }).isChecked()).toBe(true)
     await expect.poll(() => page.locator('[data-chart="curve-throttleMap"] canvas').count()).toBe(1)
-    await expect.poll(() => page.locator('[data-panel="warnings"] [data-rule="creep-hold"]').textContent()).toMatch(/Could not be checked: this controller has no creep setting/)
+    await expect.poll(() => page.locator('[data-panel="warnings"] [data-rule="creep-hold"]').textContent()).toMatch(/Could not be checked: this controller has no creep setting/i)
     expect(await page.locator('[data-figure="creepHoldGradePct"]').textContent()).toContain('This controller has no creep setting')
     // A point below the one before breaks "never falls".
     await page.getByLabel('Point 3, Torque (%)').fill('5')
@@ -30,10 +31,7 @@ describe('a controller with settings of its own, on the tune sheet', async () =>
     expect(await accessibilityProblems(page)).toEqual([])
     await shot(page, 'any-controller-01-tune-sheet')
   })
-})
 
-describe('the workshop\'s own checks, from the admin\'s list to the phone', async () => {
-  await useRunningServer()
   const tuner = await signIn('tuner@voltwright.test')
   const car = await newCar(tuner, { model: 'Checks Saloon' })
   await approvedVersion(await newProfile(car.id))

@@ -173,6 +173,7 @@ describe('a car from the tuner\'s first draft to the owner\'s handover sheet', a
     const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf, encoding: 'utf8' }) // poppler-utils
     expect(text).toContain(`Stock ref ${car.stockRef}`)
     expect(text).toContain('60 kW (80 hp)') // 60 kW / 745.7 W = 80.46 hp (NIST SP 811)
-    expect(text).toContain('25 % of 120 N·m')
+    expect(text).toMatch(/Lift-off regen\s+25 %/)
+    expect(text).toMatch(/Regen torque limit\s+120 N·m/)
   })
 })
