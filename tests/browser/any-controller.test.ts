@@ -35,6 +35,7 @@ describe('any controller, and the workshop\'s own checks', async () => {
   const tuner = await signIn('tuner@voltwright.test')
   const car = await newCar(tuner, { model: 'Checks Saloon' })
   await approvedVersion(await newProfile(car.id))
+  const cleanup = await signIn('admin@voltwright.test')
   const admin = await launch()
   const phone = await launch(390)
   afterAll(async () => { await admin.context.close(); await phone.context.close() })
@@ -82,11 +83,8 @@ describe('any controller, and the workshop\'s own checks', async () => {
     const snags = await withDatabase(c => c.query(`SELECT kind, title FROM snags WHERE "vehicleId" = $1`, [car.id]))
     expect(snags.rows).toEqual([{ kind: 'remedial', title: expect.stringContaining('Door mirrors adjust failed') }])
     await shot(page, 'any-controller-04-snag-raised')
+    const checks = await withDatabase(c => c.query(`SELECT key FROM workshop_checks WHERE label = 'Door mirrors adjust'`))
+    for (const r of checks.rows) await cleanup.call('PATCH', `/api/workshop/checks/${r.key}`, { retired: true })
   })
 
-  afterAll(async () => {
-    const checks = await withDatabase(c => c.query(`SELECT key FROM workshop_checks WHERE label = 'Door mirrors adjust'`))
-    const a = await signIn('admin@voltwright.test')
-    for (const r of checks.rows) await a.call('PATCH', `/api/workshop/checks/${r.key}`, { retired: true })
-  })
 })
