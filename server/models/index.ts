@@ -15,10 +15,11 @@ import { Snag } from './snag'
 import { Attachment } from './attachment'
 import { TelemetryLog } from './telemetry-log'
 import { Readback } from './readback'
+import { Kit } from './kit'
 
-export { Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback }
+export { Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, Kit }
 
-const all = [Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback]
+const all = [Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, Kit]
 
 export function initModels(sequelize: Sequelize) {
   for (const model of all) model.initModel(sequelize)
@@ -39,6 +40,8 @@ export function initModels(sequelize: Sequelize) {
   RoadTest.hasMany(TelemetryLog, { foreignKey: 'roadTestId', as: 'telemetry' })
   Snag.belongsTo(User, { foreignKey: 'assigneeId', as: 'assignee' })
   Snag.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' })
+  Kit.belongsTo(Platform, { foreignKey: 'platformId', as: 'platform' })
+  Profile.belongsTo(Kit, { foreignKey: 'kitId', as: 'kit' })
   Readback.belongsTo(User, { foreignKey: 'recordedById', as: 'recordedBy' })
   Readback.belongsTo(Profile, { foreignKey: 'profileId', as: 'profile' })
   Readback.belongsTo(ProfileVersion, { foreignKey: 'versionId', as: 'version' })

@@ -14,12 +14,13 @@ export function vehicleView(v: Vehicle): VehicleView {
     chassisNumber: v.chassisNumber, registration: v.registration, status: v.status, spec: v.spec,
     ownerUserId: v.ownerUserId, owner: v.owner ? { id: v.owner.id, name: v.owner.name } : null,
     platform: v.platform ? { key: v.platform.key, name: v.platform.name } : null,
+    kitId: v.kitId ?? null,
     driftedAt: v.driftedAt ?? null,
     createdAt: v.createdAt, updatedAt: v.updatedAt
   }
 }
 
-const include = [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
+export const vehicleInclude = [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
 
 // One plain query for the page and its count (the list is the busiest read): of the drive unit only what the
 // list shows, not its schema. Sort fields come from the schema's own list, so they are safe to name in SQL.
@@ -58,7 +59,7 @@ async function platformFor(key: string, workshopId: number) {
   return platform
 }
 
-async function assertOwner(ownerUserId: number | null | undefined, workshopId: number) {
+export async function assertOwner(ownerUserId: number | null | undefined, workshopId: number) {
   if (!ownerUserId) return
   const owner = await User.findOne({ where: { id: ownerUserId, workshopId } })
   if (!owner || !owner.roles.includes('client')) {
@@ -66,7 +67,7 @@ async function assertOwner(ownerUserId: number | null | undefined, workshopId: n
   }
 }
 
-function duplicateRef(e: unknown): never {
+export function duplicateRef(e: unknown): never {
   if ((e as { name?: string }).name === 'SequelizeUniqueConstraintError') {
     throw createError({ statusCode: 409, message: 'Another car already has this stock ref.', data: { fields: [{ path: 'stockRef', message: 'Already used' }] } })
   }
@@ -82,7 +83,7 @@ export async function createVehicle(user: SignedIn, input: VehicleCreate) {
     await appendAuditEvent(transaction, { workshopId: user.workshopId, vehicleId: v.id, actorId: user.id, action: 'vehicle.created', entityType: 'vehicle', entityId: v.id, data: { after: { ...fields, platformKey } } })
     return v.id
   })
-  return vehicleView((await Vehicle.findByPk(id, { include }))!)
+  return vehicleView((await Vehicle.findByPk(id, { include: vehicleInclude }))!)
 }
 
 function editable(v: Vehicle) {
@@ -103,5 +104,5 @@ export async function updateVehicle(user: SignedIn, vehicle: Vehicle, input: Veh
       await appendAuditEvent(transaction, { workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'vehicle.updated', entityType: 'vehicle', entityId: vehicle.id, data: { patch } })
     }
   })
-  return vehicleView((await Vehicle.findByPk(vehicle.id, { include }))!)
+  return vehicleView((await Vehicle.findByPk(vehicle.id, { include: vehicleInclude }))!)
 }

@@ -9,7 +9,7 @@ import { findTestedVersion } from './record'
 export async function awaitingRoadTests(user: SignedIn): Promise<{ items: AwaitingRoadTest[], total: number }> {
   const versions = await ProfileVersion.findAll({
     where: { workshopId: user.workshopId, state: 'approved' },
-    include: [{ model: Profile, as: 'profile', include: [{ model: Vehicle, as: 'vehicle' }] }],
+    include: [{ model: Profile, as: 'profile', required: true, include: [{ model: Vehicle, as: 'vehicle', required: true }] }],
     order: [['decidedAt', 'ASC'], ['id', 'ASC']]
   })
   const counts = versions.length

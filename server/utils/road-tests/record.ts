@@ -20,8 +20,10 @@ export async function findTestedVersion(user: SignedIn, versionId: number, trans
   const version = await ProfileVersion.findOne({ where: { id: versionId, workshopId: user.workshopId }, transaction })
   if (!version) throw notFound('version')
   const profile = await Profile.findByPk(version.profileId, { transaction })
-  const vehicle = await Vehicle.findOne({ where: { id: profile!.vehicleId, workshopId: user.workshopId }, include: [{ model: Platform, as: 'platform' }], transaction })
-  if (!profile || !vehicle) throw notFound('version')
+  // A kit's baseline has no car: it is never road-tested itself, its cars are.
+  if (!profile?.vehicleId) throw createError({ statusCode: 409, message: 'This is a kit baseline version; road tests are of the cars built from the kit.' })
+  const vehicle = await Vehicle.findOne({ where: { id: profile.vehicleId, workshopId: user.workshopId }, include: [{ model: Platform, as: 'platform' }], transaction })
+  if (!vehicle) throw notFound('version')
   return { version, profile, vehicle }
 }
 

@@ -19,11 +19,12 @@ function sameNameRace(e: unknown): never {
   throw e
 }
 
-interface NewVersion { parameters: Record<string, number>, rationale: string, parent: ProfileVersion | null, origin: VersionOrigin }
+// baselineVersionId: the kit baseline version the settings were built from (inherited from the parent unless given).
+export interface NewVersion { parameters: Record<string, number>, rationale: string, parent: ProfileVersion | null, origin: VersionOrigin, baselineVersionId?: number | null }
 
 // The next number is max + 1, read after the profile row is locked, so concurrent creations queue and
 // never share or skip a number (the database trigger checks the same).
-async function insertVersion(t: Transaction, user: SignedIn, profile: Profile, vehicleId: number, input: NewVersion) {
+export async function insertVersion(t: Transaction, user: SignedIn, profile: Profile, vehicleId: number | null, input: NewVersion) {
   await Profile.findByPk(profile.id, { transaction: t, lock: t.LOCK.UPDATE })
   const max = await ProfileVersion.max<number | null, ProfileVersion>('versionNo', { where: { profileId: profile.id }, transaction: t })
   const content = {
@@ -31,16 +32,25 @@ async function insertVersion(t: Transaction, user: SignedIn, profile: Profile, v
     parameters: input.parameters, rationale: input.rationale, authorId: user.id, origin: input.origin
   }
   const contentHash = versionContentHash(content)
-  const version = await ProfileVersion.create({ ...content, workshopId: user.workshopId, contentHash }, { transaction: t })
+  const baselineVersionId = input.baselineVersionId === undefined ? input.parent?.baselineVersionId ?? null : input.baselineVersionId
+  const version = await ProfileVersion.create({ ...content, workshopId: user.workshopId, contentHash, baselineVersionId }, { transaction: t })
   await appendAuditEvent(t, {
     workshopId: user.workshopId, vehicleId, actorId: user.id, action: 'version.created', entityType: 'version', entityId: version.id,
     data: {
       profileId: profile.id, profileName: profile.name, versionNo: version.versionNo, parentVersionId: content.parentVersionId,
-      parentVersionNo: input.parent?.versionNo ?? null, origin: input.origin, contentHash, parameters: input.parameters, rationale: input.rationale,
+      parentVersionNo: input.parent?.versionNo ?? null, origin: input.origin, contentHash, parameters: input.parameters, rationale: input.rationale, ...(baselineVersionId ? { baselineVersionId } : {}),
       patchFromParent: input.parent ? jsonPatch(input.parent.parameters, input.parameters) : null
     }
   })
   return version
+}
+
+// A new profile of a car or of a kit (its baseline), with its event in the history.
+export async function insertProfile(t: Transaction, user: SignedIn, owner: { vehicleId: number } | { kitId: number }, name: string) {
+  const profile = await Profile.create({ workshopId: user.workshopId, ...owner, name }, { transaction: t })
+  const vehicleId = 'vehicleId' in owner ? owner.vehicleId : null
+  await appendAuditEvent(t, { workshopId: user.workshopId, vehicleId, actorId: user.id, action: 'profile.created', entityType: 'profile', entityId: profile.id, data: { name, ...('kitId' in owner ? { kitId: owner.kitId } : {}) } })
+  return profile
 }
 
 export async function createProfile(user: SignedIn, vehicle: Vehicle, input: ProfileCreate) {
@@ -48,8 +58,7 @@ export async function createProfile(user: SignedIn, vehicle: Vehicle, input: Pro
   const versionId = await useDatabase().transaction(async (t) => {
     const clash = await Profile.findOne({ where: { vehicleId: vehicle.id, name: input.name }, transaction: t })
     if (clash) throw createError({ statusCode: 409, message: `This car already has a profile called "${input.name}".`, data: { fields: [{ path: 'name', message: 'Already used on this car' }] } })
-    const profile = await Profile.create({ workshopId: user.workshopId, vehicleId: vehicle.id, name: input.name }, { transaction: t })
-    await appendAuditEvent(t, { workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'profile.created', entityType: 'profile', entityId: profile.id, data: { name: profile.name } })
+    const profile = await insertProfile(t, user, { vehicleId: vehicle.id }, input.name)
     const version = await insertVersion(t, user, profile, vehicle.id, { parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
     return version.id
   }).catch(sameNameRace)
@@ -57,7 +66,8 @@ export async function createProfile(user: SignedIn, vehicle: Vehicle, input: Pro
 }
 
 // A new draft from any earlier version of the profile (by default the one on the car, else the latest).
-export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate, origin: VersionOrigin = 'workshop') {
+// `baselineVersionId` is given only when rebasing onto a newer kit baseline.
+export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate, origin: VersionOrigin = 'workshop', baselineVersionId?: number) {
   const profile = await Profile.findOne({ where: { id: profileId, workshopId: user.workshopId } })
   if (!profile) throw createError({ statusCode: 404, message: 'No such profile in this workshop.' })
   const versionId = await useDatabase().transaction(async (t) => {
@@ -68,7 +78,7 @@ export async function createVersion(user: SignedIn, profileId: number, input: Ve
       throw createError({ statusCode: 400, message: 'The version to start from is not a version of this profile.', data: { fields: [{ path: 'fromVersionId', message: 'Not a version of this profile' }] } })
     }
     const parameters = input.parameters ?? parent?.parameters ?? {}
-    const version = await insertVersion(t, user, profile, profile.vehicleId, { parameters, rationale: input.rationale, parent, origin })
+    const version = await insertVersion(t, user, profile, profile.vehicleId, { parameters, rationale: input.rationale, parent, origin, baselineVersionId })
     return version.id
   })
   return readVersion(user, versionId)
@@ -77,7 +87,7 @@ export async function createVersion(user: SignedIn, profileId: number, input: Ve
 // Saves a draft. A save made from a stale copy changes nothing and answers both sides, so the person can choose.
 export async function updateDraft(user: SignedIn, id: number, input: VersionUpdate) {
   await useDatabase().transaction(async (t) => {
-    const { version: v, vehicle } = await loadVersion(user, id, t)
+    const { version: v, subject } = await loadVersion(user, id, t)
     if (v.authorId !== user.id) throw createError({ statusCode: 403, message: 'Only the author of a draft can change it; start a new version from it instead.' })
     assertVersionState(v, ['draft'], 'changed')
     if (v.lockVersion !== input.lockVersion) {
@@ -98,7 +108,7 @@ export async function updateDraft(user: SignedIn, id: number, input: VersionUpda
     const contentHash = versionContentHash({ ...v.get(), ...after })
     await v.update({ ...after, lockVersion: v.lockVersion + 1, contentHash }, { transaction: t })
     await appendAuditEvent(t, {
-      workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'version.edited', entityType: 'version', entityId: v.id,
+      workshopId: user.workshopId, vehicleId: subject.vehicleId, actorId: user.id, action: 'version.edited', entityType: 'version', entityId: v.id,
       data: { versionNo: v.versionNo, patch, lockVersion: v.lockVersion, contentHash }
     })
   })

@@ -13,17 +13,17 @@ import { figureDiff, warningDiff } from './diff-figures'
 
 interface PairRow {
   id: number, versionNo: number, state: VersionState, parameters: Record<string, number>, profileName: string,
-  vehicleId: number, spec: VehicleSpec, platformKey: string, platformName: string, motorMaxRpm: number, schema: unknown, settings: Record<string, unknown>
+  vehicleId: number | null, kitId: number | null, spec: VehicleSpec, platformKey: string, platformName: string, motorMaxRpm: number, schema: unknown, settings: Record<string, unknown>
 }
 
-// Both versions with their car, drive unit and workshop settings in one plain query (the diff is on the
-// engineer's hot path; nested model includes cost more than the two evaluations).
+// Both versions with their car (or, for a kit's baseline, the kit's spec template), drive unit and workshop
+// settings in one plain query (the diff is on the engineer's hot path; nested includes cost more than the evaluations).
 async function loadPair(user: SignedIn, aId: number, bId: number) {
   const rows = await useDatabase().query<PairRow>(
-    `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", v.spec,
+    `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", k.id AS "kitId", COALESCE(v.spec, k."specTemplate") AS spec,
             pl.key AS "platformKey", pl.name AS "platformName", pl."motorMaxRpm", pl.schema, w.settings
-       FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId" JOIN vehicles v ON v.id = p."vehicleId"
-       JOIN platforms pl ON pl.id = v."platformId" JOIN workshops w ON w.id = pv."workshopId"
+       FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId" LEFT JOIN vehicles v ON v.id = p."vehicleId" LEFT JOIN kits k ON k.id = p."kitId"
+       JOIN platforms pl ON pl.id = COALESCE(v."platformId", k."platformId") JOIN workshops w ON w.id = pv."workshopId"
       WHERE pv.id IN (:ids) AND pv."workshopId" = :workshopId`,
     { replacements: { ids: [aId, bId], workshopId: user.workshopId }, type: QueryTypes.SELECT })
   const pick = (id: number) => {
@@ -47,7 +47,7 @@ export function parameterRows(a: Record<string, number>, b: Record<string, numbe
 }
 
 const platformOf = (r: PairRow): PlatformLike => ({ key: r.platformKey, name: r.platformName, motorMaxRpm: r.motorMaxRpm, schema: r.schema })
-const head = (r: PairRow) => ({ id: r.id, versionNo: r.versionNo, profileName: r.profileName, state: r.state, vehicleId: r.vehicleId })
+const head = (r: PairRow) => ({ id: r.id, versionNo: r.versionNo, profileName: r.profileName, state: r.state, vehicleId: r.vehicleId, kitId: r.kitId })
 const side = (r: PairRow, e: Evaluation): VersionSide =>
   ({ versionId: r.id, label: `${r.profileName} v${r.versionNo}`, valid: e.valid, errors: e.errors, warnings: e.warnings, figures: e.figures, curves: e.curves })
 

@@ -22,7 +22,7 @@ export async function submitVersion(user: SignedIn, id: number, input: SubmitInp
     const v = about.version
     requireAuthor(user, v.authorId, 'send')
     assertVersionState(v, ['draft'], 'sent for review')
-    const evaluation = evaluateOnServer(about.vehicle.spec, about.platform, v.parameters, settings)
+    const evaluation = evaluateOnServer(about.subject.spec, about.platform, v.parameters, settings)
     if (!evaluation.valid) {
       throw createError({ statusCode: 400, message: 'This version has hard errors; correct them before sending it for review.', data: { fields: evaluation.errors } })
     }
@@ -40,7 +40,7 @@ export async function submitVersion(user: SignedIn, id: number, input: SubmitInp
     const kept = Object.fromEntries(Object.entries(justifications).filter(([rule, text]) => warned.has(rule) && text))
     await v.update({ state: 'in-review', evaluation: snapshotOf(evaluation) as unknown as Record<string, unknown>, justifications: kept, submittedAt: new Date(), lockVersion: v.lockVersion + 1 }, { transaction: t })
     await appendAuditEvent(t, {
-      workshopId: user.workshopId, vehicleId: about.vehicle.id, actorId: user.id, action: 'version.submitted', entityType: 'version', entityId: v.id,
+      workshopId: user.workshopId, vehicleId: about.subject.vehicleId, actorId: user.id, action: 'version.submitted', entityType: 'version', entityId: v.id,
       data: { versionNo: v.versionNo, contentHash: v.contentHash, dangerCount: dangers.length, warnings: evaluation.warnings.map(w => ({ rule: w.rule, severity: w.severity })), justifications: kept }
     })
     await mailReviewWanted(t, user, about, dangers.length)
@@ -51,12 +51,12 @@ export async function submitVersion(user: SignedIn, id: number, input: SubmitInp
 // The author takes a draft or a version awaiting review off the table; it stays in the record.
 export async function withdrawVersion(user: SignedIn, id: number) {
   await useDatabase().transaction(async (t) => {
-    const { version: v, vehicle } = await loadVersion(user, id, t)
+    const { version: v, subject } = await loadVersion(user, id, t)
     requireAuthor(user, v.authorId, 'withdraw')
     assertVersionState(v, ['draft', 'in-review'], 'withdrawn')
     const fromState = v.state
     await v.update({ state: 'withdrawn', decidedAt: new Date(), lockVersion: v.lockVersion + 1 }, { transaction: t })
-    await appendAuditEvent(t, { workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'version.withdrawn', entityType: 'version', entityId: v.id, data: { versionNo: v.versionNo, fromState } })
+    await appendAuditEvent(t, { workshopId: user.workshopId, vehicleId: subject.vehicleId, actorId: user.id, action: 'version.withdrawn', entityType: 'version', entityId: v.id, data: { versionNo: v.versionNo, fromState } })
   })
   return readVersion(user, id)
 }
@@ -73,7 +73,7 @@ export async function decideVersion(user: SignedIn, id: number, decision: 'appro
     const review = await Review.create({ workshopId: user.workshopId, versionId: v.id, reviewerId: user.id, decision, comment }, { transaction: t })
     await v.update({ state: decision === 'approve' ? 'approved' : 'rejected', decidedAt: new Date(), lockVersion: v.lockVersion + 1 }, { transaction: t })
     await appendAuditEvent(t, {
-      workshopId: user.workshopId, vehicleId: about.vehicle.id, actorId: user.id, action: decision === 'approve' ? 'version.approved' : 'version.rejected',
+      workshopId: user.workshopId, vehicleId: about.subject.vehicleId, actorId: user.id, action: decision === 'approve' ? 'version.approved' : 'version.rejected',
       entityType: 'version', entityId: v.id, data: { versionNo: v.versionNo, reviewId: review.id, comment, contentHash: v.contentHash }
     })
     await mailDecision(t, user, await User.findByPk(v.authorId, { transaction: t }), about, decision, comment)

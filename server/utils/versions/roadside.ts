@@ -30,7 +30,7 @@ export async function recordRoadsideVersion(user: SignedIn, roadTestId: number, 
     const now = new Date()
     const content = { profileId: profile!.id, versionNo: Number(next), parentVersionId: tested!.id, parameters: input.parameters, rationale: input.rationale, authorId: user.id }
     const version = await ProfileVersion.create({
-      ...content, workshopId: user.workshopId, state: 'in-review', origin: 'roadside', roadTestId: rt.id,
+      ...content, workshopId: user.workshopId, state: 'in-review', origin: 'roadside', roadTestId: rt.id, baselineVersionId: tested!.baselineVersionId,
       evaluation: snapshotOf(evaluation, now) as unknown as Record<string, unknown>, contentHash: versionContentHash({ ...content, origin: 'roadside' }), submittedAt: now
     }, { transaction })
     await appendAuditEvent(transaction, {

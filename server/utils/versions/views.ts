@@ -1,8 +1,9 @@
 import type { Transaction } from 'sequelize'
-import { Platform, Profile, ProfileVersion, Review, User, Vehicle } from '../../models'
+import { Kit, Platform, Profile, ProfileVersion, Review, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { EvaluationSnapshot, ReviewView, VersionSummary } from '../../../shared/schemas/profile-views'
 import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
+import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 
 const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null)
 const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : null)
@@ -29,18 +30,28 @@ export function versionSummary(v: ProfileVersion & { reviews?: Review[] }): Vers
 export const authorInclude = { model: User, as: 'author', attributes: ['id', 'name'] }
 export const reviewsInclude = { model: Review, as: 'reviews', include: [{ model: User, as: 'reviewer', attributes: ['id', 'name'] }] }
 
-export interface VersionContext { version: ProfileVersion, profile: Profile, vehicle: Vehicle, platform: Platform }
+// What a version is evaluated on and named by: a car, or a kit's baseline (its spec template).
+export interface VersionSubject { vehicleId: number | null, kitId: number | null, spec: VehicleSpec, name: string, shortName: string }
+export interface VersionContext { version: ProfileVersion, profile: Profile, vehicle: Vehicle | null, kit: Kit | null, platform: Platform, subject: VersionSubject }
 
-// A version of the signed-in person's workshop with its profile, car and drive unit; anything else is 404.
-// With `lock`, the version row is locked FOR UPDATE first, so concurrent transitions queue behind it.
+const withPlatform = [{ model: Platform, as: 'platform' }]
+
+// A version of the signed-in person's workshop with its profile, car (or kit) and drive unit; anything else
+// is 404. With `lock`, the version row is locked FOR UPDATE first, so concurrent transitions queue behind it.
 export async function loadVersion(user: SignedIn, id: number, transaction?: Transaction): Promise<VersionContext> {
   const version = await ProfileVersion.findOne({
     where: { id, workshopId: user.workshopId }, transaction, ...(transaction ? { lock: transaction.LOCK.UPDATE } : {})
   })
   if (!version) throw createError({ statusCode: 404, message: 'No such version in this workshop.' })
-  const profile = await Profile.findByPk(version.profileId, { transaction, include: [{ model: Vehicle, as: 'vehicle', include: [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }] }] })
-  const vehicle = (profile as Profile & { vehicle: Vehicle }).vehicle
-  return { version, profile: profile!, vehicle, platform: vehicle.platform! }
+  const profile = (await Profile.findByPk(version.profileId, { transaction, include: [
+    { model: Vehicle, as: 'vehicle', include: [...withPlatform, { model: User, as: 'owner', attributes: ['id', 'name'] }] },
+    { model: Kit, as: 'kit', include: withPlatform }
+  ] })) as Profile & { vehicle: Vehicle | null, kit: Kit | null }
+  const { vehicle, kit } = profile
+  const subject = vehicle
+    ? { vehicleId: vehicle.id, kitId: null, spec: vehicle.spec, name: `${vehicle.stockRef} (${vehicle.year} ${vehicle.make} ${vehicle.model})`, shortName: `${vehicle.stockRef} ${vehicle.make} ${vehicle.model}` }
+    : { vehicleId: null, kitId: kit!.id, spec: kit!.specTemplate, name: `the ${kit!.name} kit's baseline`, shortName: `Kit ${kit!.name} baseline` }
+  return { version, profile, vehicle, kit, platform: (vehicle ?? kit)!.platform!, subject }
 }
 
 // 409 naming the state the version is in, for every transition tried from the wrong one.
