@@ -20,7 +20,7 @@ export function settingsThatDiffer(a: Settings, b: Settings): string[] {
 }
 
 // base: the baseline the car stood on; car: the car's settings; kit: the newer baseline.
-export function mergeSettings(base: Settings, car: Settings, kit: Settings): MergeRow[] {
+export function mergeThreeWay(base: Settings, car: Settings, kit: Settings): MergeRow[] {
   const names = [...new Set([...Object.keys(base), ...Object.keys(car), ...Object.keys(kit)])].sort()
   return names.map((name) => {
     const [b, c, k] = [value(base, name), value(car, name), value(kit, name)]

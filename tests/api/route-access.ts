@@ -9,7 +9,7 @@ import { multipart, upload } from './road-test-fixtures'
 // Demo things looked up at the start of the test; each `[param]` of a route names the one it is called with.
 // signedOff: a signed-off version by tuner@ (so withdrawing it is refused for its state); sibling: another version of its profile;
 // roadTest: a signed road test (so sign-off and uploads are refused for its state).
-export type Fixture = 'car' | 'profile' | 'signedOff' | 'sibling' | 'roadTest' | 'snag' | 'user' | 'platform' | 'attachment'
+export type Fixture = 'car' | 'profile' | 'signedOff' | 'sibling' | 'roadTest' | 'snag' | 'user' | 'platform' | 'attachment' | 'kit'
 
 export interface Access {
   roles: readonly Role[]
@@ -44,9 +44,15 @@ export const routeAccess: Record<string, Access> = {
   'drift/index.get.ts': { roles: staff, foreign: 'allowed' },
   'evaluate.post.ts': { roles: all, foreign: 'allowed' },
   'health.get.ts': { roles: all, anonymous: true, foreign: 'allowed' },
+  'kits/[id].get.ts': { roles: staff, foreign: 404, params: { id: 'kit' } },
+  'kits/[id].patch.ts': { roles: ['admin', 'tuner', 'engineer'], foreign: 404, params: { id: 'kit' }, foreignBody: {} },
+  'kits/index.get.ts': { roles: staff, foreign: 'allowed' },
+  'kits/index.post.ts': { roles: ['admin', 'tuner', 'engineer'], foreign: 'allowed' },
   'platforms/[key].get.ts': { roles: all, foreign: 'allowed', params: { key: 'platform' } },
   'platforms/index.get.ts': { roles: all, foreign: 'allowed' },
   'platforms/index.post.ts': { roles: ['admin'], foreign: 'allowed' },
+  'profiles/[id]/rebase.get.ts': { roles: staff, foreign: 404, params: { id: 'profile' } },
+  'profiles/[id]/rebase.post.ts': { roles: ['tuner'], foreign: 403, params: { id: 'profile' } },
   'profiles/[id]/versions.post.ts': { roles: ['tuner'], foreign: 403, params: { id: 'profile' } },
   'road-tests/[id].get.ts': { roles: staff, foreign: 404, params: roadTest },
   'road-tests/[id]/chart.get.ts': { roles: staff, foreign: 404, params: roadTest },
@@ -117,6 +123,7 @@ export async function demoFixtures(): Promise<Record<Fixture, string> & { otherC
       snag: await one('SELECT id FROM snags WHERE "workshopId" = $1 ORDER BY id LIMIT 1', [ws]),
       user: String(tuner!.id),
       platform: 'fenlow-45',
+      kit: await one('SELECT id FROM kits WHERE "workshopId" = $1 ORDER BY id LIMIT 1', [ws]),
       attachment: await photoOfThrowawaySnag()
     }
   })

@@ -3,7 +3,7 @@ import { Kit, Profile, ProfileVersion, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { RebaseInput, RebasePreview } from '../../../shared/schemas/kit'
 import { schemaProperties } from '../../../shared/compute/parameter-input'
-import { mergeSettings, settleMerge } from '../../../shared/utils/three-way'
+import { mergeThreeWay, settleMerge } from '../../../shared/utils/three-way'
 import { createVersion } from '../versions/create'
 import { currentVersion, latestApprovedBaseline } from './baseline'
 
@@ -22,7 +22,7 @@ async function rebaseContext(user: SignedIn, profileId: number) {
 export async function previewRebase(user: SignedIn, profileId: number): Promise<RebasePreview> {
   const { profile, vehicle, current, from, to, kit } = await rebaseContext(user, profileId)
   const props = schemaProperties(vehicle.platform!.schema)
-  const rows = mergeSettings(from.parameters, current.parameters, to.parameters).map(r => ({
+  const rows = mergeThreeWay(from.parameters, current.parameters, to.parameters).map(r => ({
     ...r, label: typeof props[r.name]?.title === 'string' ? props[r.name]!.title as string : r.name, unit: typeof props[r.name]?.unit === 'string' ? props[r.name]!.unit as string : ''
   }))
   return {
@@ -36,7 +36,7 @@ export async function previewRebase(user: SignedIn, profileId: number): Promise<
 export async function rebaseProfile(user: SignedIn, profileId: number, input: RebaseInput) {
   const { current, from, to, kit } = await rebaseContext(user, profileId)
   if (to.versionNo <= from.versionNo) throw createError({ statusCode: 409, message: `This profile already stands on the ${kit.name} kit's newest approved baseline (version ${from.versionNo}).` })
-  const { parameters, unresolved } = settleMerge(mergeSettings(from.parameters, current.parameters, to.parameters), input.choices as Record<string, 'car' | 'kit'>)
+  const { parameters, unresolved } = settleMerge(mergeThreeWay(from.parameters, current.parameters, to.parameters), input.choices as Record<string, 'car' | 'kit'>)
   if (unresolved.length) {
     throw createError({
       statusCode: 409, message: `Both the car and the kit's baseline changed ${unresolved.length === 1 ? 'a setting' : `${unresolved.length} settings`}; choose which value to keep for each.`,
