@@ -8,6 +8,7 @@ import * as history from './20261201-0007-history'
 import * as revokedSessions from './20261202-0008-revoked-sessions'
 import * as platformKeys from './20261202-0009-platform-keys-per-workshop'
 import * as kits from './20261203-5001-kits'
+import * as fleetRechecks from './20261203-5002-fleet-rechecks'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -18,5 +19,6 @@ export const migrations = [
   { name: '20261201-0007-history', ...history },
   { name: '20261202-0008-revoked-sessions', ...revokedSessions },
   { name: '20261202-0009-platform-keys-per-workshop', ...platformKeys },
-  { name: '20261203-5001-kits', ...kits }
+  { name: '20261203-5001-kits', ...kits },
+  { name: '20261203-5002-fleet-rechecks', ...fleetRechecks }
 ]

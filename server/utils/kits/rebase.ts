@@ -8,14 +8,15 @@ import { createVersion } from '../versions/create'
 import { currentVersion, latestApprovedBaseline } from './baseline'
 
 async function rebaseContext(user: SignedIn, profileId: number) {
-  const profile = await Profile.findOne({ where: { id: profileId, workshopId: user.workshopId }, include: [{ model: ProfileVersion, as: 'versions' }, { model: Vehicle, as: 'vehicle', include: ['platform'] }] }) as Profile & { vehicle: Vehicle | null }
-  if (!profile?.vehicle) throw createError({ statusCode: 404, message: 'No such car profile in this workshop.' })
-  const current = currentVersion(profile.versions ?? [])
+  const profile = await Profile.findOne({ where: { id: profileId, workshopId: user.workshopId } })
+  const vehicle = profile?.vehicleId ? await Vehicle.findByPk(profile.vehicleId, { include: ['platform'] }) : null
+  if (!profile || !vehicle) throw createError({ statusCode: 404, message: 'No such car profile in this workshop.' })
+  const current = currentVersion(await ProfileVersion.findAll({ where: { profileId: profile.id } }))
   const from = current?.baselineVersionId ? await ProfileVersion.findByPk(current.baselineVersionId) : null
   const baseProfile = from ? await Profile.findByPk(from.profileId, { include: [{ model: Kit, as: 'kit' }] }) as Profile & { kit: Kit | null } : null
   if (!current || !from || !baseProfile?.kit) throw createError({ statusCode: 409, message: 'This profile was not built from a kit, so it has no baseline to move onto.' })
   const to = (await latestApprovedBaseline(baseProfile.id)) ?? from
-  return { profile, vehicle: profile.vehicle, current, from, to, kit: baseProfile.kit }
+  return { profile, vehicle, current, from, to, kit: baseProfile.kit }
 }
 
 // What a rebase would give: each setting with the old baseline, the car, the new baseline and the result.

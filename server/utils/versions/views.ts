@@ -43,11 +43,9 @@ export async function loadVersion(user: SignedIn, id: number, transaction?: Tran
     where: { id, workshopId: user.workshopId }, transaction, ...(transaction ? { lock: transaction.LOCK.UPDATE } : {})
   })
   if (!version) throw createError({ statusCode: 404, message: 'No such version in this workshop.' })
-  const profile = (await Profile.findByPk(version.profileId, { transaction, include: [
-    { model: Vehicle, as: 'vehicle', include: [...withPlatform, { model: User, as: 'owner', attributes: ['id', 'name'] }] },
-    { model: Kit, as: 'kit', include: withPlatform }
-  ] })) as Profile & { vehicle: Vehicle | null, kit: Kit | null }
-  const { vehicle, kit } = profile
+  const profile = (await Profile.findByPk(version.profileId, { transaction }))!
+  const vehicle = profile.vehicleId ? await Vehicle.findByPk(profile.vehicleId, { transaction, include: [...withPlatform, { model: User, as: 'owner', attributes: ['id', 'name'] }] }) : null
+  const kit = vehicle ? null : await Kit.findByPk(profile.kitId!, { transaction, include: withPlatform })
   const subject = vehicle
     ? { vehicleId: vehicle.id, kitId: null, spec: vehicle.spec, name: `${vehicle.stockRef} (${vehicle.year} ${vehicle.make} ${vehicle.model})`, shortName: `${vehicle.stockRef} ${vehicle.make} ${vehicle.model}` }
     : { vehicleId: null, kitId: kit!.id, spec: kit!.specTemplate, name: `the ${kit!.name} kit's baseline`, shortName: `Kit ${kit!.name} baseline` }
