@@ -9,6 +9,7 @@ import * as revokedSessions from './20261202-0008-revoked-sessions'
 import * as platformKeys from './20261202-0009-platform-keys-per-workshop'
 import * as kits from './20261203-5001-kits'
 import * as fleetRechecks from './20261203-5002-fleet-rechecks'
+import * as onCarEvaluations from './20261203-5003-on-car-evaluations'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -20,5 +21,6 @@ export const migrations = [
   { name: '20261202-0008-revoked-sessions', ...revokedSessions },
   { name: '20261202-0009-platform-keys-per-workshop', ...platformKeys },
   { name: '20261203-5001-kits', ...kits },
-  { name: '20261203-5002-fleet-rechecks', ...fleetRechecks }
+  { name: '20261203-5002-fleet-rechecks', ...fleetRechecks },
+  { name: '20261203-5003-on-car-evaluations', ...onCarEvaluations }
 ]

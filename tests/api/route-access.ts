@@ -45,6 +45,8 @@ export const routeAccess: Record<string, Access> = {
   'evaluate.post.ts': { roles: all, foreign: 'allowed' },
   'fleet/recheck.get.ts': { roles: staff, foreign: 'allowed' },
   'fleet/recheck.post.ts': { roles: ['admin', 'engineer'], foreign: 'allowed' },
+  'fleet/search.csv.post.ts': { roles: staff, foreign: 'allowed' },
+  'fleet/search.post.ts': { roles: staff, foreign: 'allowed' },
   'health.get.ts': { roles: all, anonymous: true, foreign: 'allowed' },
   'kits/[id].get.ts': { roles: staff, foreign: 404, params: { id: 'kit' } },
   'kits/[id].patch.ts': { roles: ['admin', 'tuner', 'engineer'], foreign: 404, params: { id: 'kit' }, foreignBody: {} },

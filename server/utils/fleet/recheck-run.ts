@@ -10,9 +10,10 @@ import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { evaluateOnServer, settingsOf } from '../platforms/evaluation'
 import { mailRecheckResult } from './recheck-mail'
+import { saveOnCarEvaluations } from './on-car-evaluation'
 
 interface Claimed {
-  id: string, recheckId: number, workshopId: number, vehicleId: number, versionId: number, versionNo: number, reason: string,
+  id: string, recheckId: number, profileId: number, workshopId: number, vehicleId: number, versionId: number, versionNo: number, reason: string,
   parameters: Record<string, number>, evaluation: EvaluationSnapshot | null, spec: VehicleSpec, settings: unknown,
   platformKey: string, platformName: string, motorMaxRpm: number, schema: unknown
 }
@@ -21,7 +22,7 @@ const BATCH = 100
 
 async function claim(t: Transaction, limit: number) {
   return useDatabase().query<Claimed>(
-    `SELECT i.id, i."recheckId", i."workshopId", i."vehicleId", i."versionId", pv."versionNo", r.reason, pv.parameters, pv.evaluation, v.spec, w.settings,
+    `SELECT i.id, i."recheckId", pv."profileId", i."workshopId", i."vehicleId", i."versionId", pv."versionNo", r.reason, pv.parameters, pv.evaluation, v.spec, w.settings,
             pl.key AS "platformKey", pl.name AS "platformName", pl."motorMaxRpm", pl.schema
        FROM fleet_recheck_items i JOIN fleet_rechecks r ON r.id = i."recheckId" JOIN profile_versions pv ON pv.id = i."versionId"
        JOIN vehicles v ON v.id = i."vehicleId" JOIN platforms pl ON pl.id = v."platformId" JOIN workshops w ON w.id = i."workshopId"
@@ -39,11 +40,12 @@ export async function runRecheckBatch(limit = BATCH): Promise<number> {
       const platform: PlatformLike = { key: i.platformKey, name: i.platformName, motorMaxRpm: i.motorMaxRpm, schema: i.schema }
       const now = evaluateOnServer(i.spec, platform, i.parameters, settingsOf({ settings: i.settings }))
       const fresh = newWarnings(i.evaluation?.warnings ?? [], now.warnings).map(w => ({ rule: w.rule, severity: w.severity, message: w.message }))
-      return { item: i, fresh, rank: worstRank(fresh) }
+      return { item: i, fresh, rank: worstRank(fresh), now }
     })
     await sequelize.query(`UPDATE fleet_recheck_items i SET state = 'done', "checkedAt" = now(), "newWarnings" = r.nw, "newWarningCount" = r.n, "worstRank" = r.rank
         FROM jsonb_to_recordset(CAST(:rows AS jsonb)) AS r(id bigint, nw jsonb, n integer, rank integer) WHERE i.id = r.id`,
     { replacements: { rows: JSON.stringify(results.map(r => ({ id: r.item.id, nw: r.fresh, n: r.fresh.length, rank: r.rank }))) }, transaction: t })
+    await saveOnCarEvaluations(t, results.map(r => ({ ...r.item, evaluation: r.now })))
     for (const { item, fresh } of results) {
       await appendAuditEvent(t, {
         workshopId: item.workshopId, vehicleId: item.vehicleId, action: 'fleet.rechecked', entityType: 'version', entityId: item.versionId,

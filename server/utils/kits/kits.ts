@@ -67,7 +67,7 @@ export async function createKit(user: SignedIn, input: KitCreate): Promise<KitVi
     await appendAuditEvent(t, { workshopId: user.workshopId, actorId: user.id, action: 'kit.created', entityType: 'kit', entityId: kit.id, data: { after: { name: kit.name, platformKey: platform.key, fits: kit.fits, specTemplate: kit.specTemplate } } })
     const profile = await insertProfile(t, user, { kitId: kit.id }, 'Baseline')
     await kit.update({ baselineProfileId: profile.id }, { transaction: t })
-    const parameters = input.parameters ?? defaultParameters(platform)
+    const parameters = { ...defaultParameters(platform), ...input.parameters }
     await insertVersion(t, user, profile, null, { parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
     return kit.id
   }).catch(sameName)

@@ -14,6 +14,7 @@ import { clearDrift } from '../fleet/readbacks'
 import { sha256Hex, appendAuditEvent } from '../history/audit'
 import { queueMail, peopleWithRole, absoluteUrl } from '../mail/outbox'
 import { carLabel, findRoadTest, readRoadTest } from './record'
+import { refreshOnCarEvaluation } from '../fleet/on-car-evaluation'
 
 export interface MissingForSignOff { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }
 
@@ -73,6 +74,7 @@ export async function signOffRoadTest(user: SignedIn, id: number) {
     if (previousId) await ProfileVersion.update({ state: 'superseded' }, { where: { id: previousId, state: 'signed-off' }, transaction })
     await version!.update({ state: 'signed-off' }, { transaction })
     await profile!.update({ onCarVersionId: version!.id }, { transaction })
+    await refreshOnCarEvaluation(transaction, profile!.id)
     const at = new Date()
     const contentHash = await roadTestRecordHash(rt!, version!, at, transaction)
     await rt!.update({ signed: { testerId: user.id, at: at.toISOString(), contentHash } }, { transaction })
