@@ -16,7 +16,7 @@ const roadster = { powerCapKw: 42, torqueCapNm: 150, regenTorqueLimitNm: 80, lif
 export const demoKits: DemoKit[] = [
   {
     name: 'Forge RD-45 small rear-drive', platformKey: 'fenlow-45',
-    fits: [{ make: 'Penhallow', model: 'Marten Roadster', yearFrom: 1958, yearTo: 1968 }, { make: 'Harrowby', model: 'Tamsin 1300 Saloon', yearFrom: 1963, yearTo: 1971 }],
+    fits: [{ make: 'Penhallow', model: 'Marten Roadster', yearFrom: 1958, yearTo: 1968 }, { make: 'Penhallow', model: 'Kestrel Roadster', yearFrom: 1961, yearTo: 1969 }, { make: 'Harrowby', model: 'Tamsin 1300 Saloon', yearFrom: 1963, yearTo: 1971 }],
     specTemplate: { kerbMassKg: 930, frontAxleLoadPct: 49, wheelbaseMm: 2300, cgHeightMm: 480, tyreSize: '155/80 R13 79T', finalDriveRatio: 7.2, drivetrainEfficiency: 0.9, dragCoefficient: 0.45, frontalAreaM2: 1.6, rollingResistanceCoeff: 0.011, drivenAxle: 'rear', originalEnginePowerKw: 45, ...pack },
     baseline: [
       { author: tuner, daysAgo: 40, state: 'approved', parameters: roadster, rationale: 'The settings proved on the first four builds: lift-off regen well inside the rear grip in the wet, 120 km/h for drum brakes.', review: { by: engineer, decision: 'approve', comment: 'A sound starting point for this family of cars.' } },
@@ -24,7 +24,7 @@ export const demoKits: DemoKit[] = [
     ],
     cars: [
       {
-        car: { stockRef: 'OF-107', make: 'Penhallow', model: 'Marten Roadster', year: 1964, chassisNumber: 'PM64-05120', registration: 'HWP 208B', status: 'road-testing' },
+        car: { stockRef: 'OF-107', make: 'Penhallow', model: 'Kestrel Roadster', year: 1964, chassisNumber: 'PM64-05120', registration: 'HWP 208B', status: 'road-testing' },
         spec: { kerbMassKg: 915, cgHeightMm: 465 }, onBaselineNo: 1,
         versions: [{ author: tuner, daysAgo: 20, state: 'approved', parameters: { ...roadster, powerCapKw: 40, speedLimitKph: 110 }, rationale: 'From the kit baseline; 40 kW and 110 km/h for this car\'s original cross-ply-era wheels.', review: { by: lead, decision: 'approve', comment: 'Fine for the road test.' } }]
       },

@@ -17,6 +17,12 @@ type Kind = 'string' | 'number' | 'boolean' | 'array' | 'object'
 const bodyField: Record<string, [string, Kind]> = {
   'auth/login.post.ts': ['email', 'string'],
   'evaluate.post.ts': ['platformKey', 'string'],
+  'fleet/recheck.post.ts': ['note', 'string'],
+  'fleet/search.csv.post.ts': ['conditions', 'array'],
+  'fleet/search.post.ts': ['conditions', 'array'],
+  'kits/[id].patch.ts': ['fits', 'array'],
+  'kits/index.post.ts': ['name', 'string'],
+  'profiles/[id]/rebase.post.ts': ['choices', 'object'],
   'platforms/index.post.ts': ['motorMaxRpm', 'number'],
   'profiles/[id]/versions.post.ts': ['fromVersionId', 'number'],
   'road-tests/[id]/roadside-version.post.ts': ['rationale', 'string'],

@@ -27,7 +27,7 @@ describe('the workshop\'s fleet', async () => {
     await expect.poll(() => page.locator('#spec-kerbMassKg').inputValue()).toBe('930')
     await page.locator('#stockRef').fill(stockRef)
     await page.locator('#make').fill('Penhallow')
-    await page.locator('#model').fill('Marten Roadster')
+    await page.locator('#model').fill('Kestrel Roadster')
     await page.locator('#year').fill('1966')
     await page.locator('#spec-kerbMassKg').fill('940')
     await page.getByRole('button', { name: 'Book in the car' }).click()
