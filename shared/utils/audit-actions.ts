@@ -59,7 +59,9 @@ const detailLabels: Record<string, string> = {
   warnings: 'Warnings', dangerCount: 'Danger warnings', justifications: 'Justifications', parameters: 'Settings', rationale: 'Rationale',
   profileName: 'Profile', parentVersionId: 'Drafted from version id', parentVersionNo: 'Drafted from version', patchFromParent: 'Changed from that version',
   origin: 'Made', name: 'Name', make: 'Make', model: 'Model', status: 'Stage', stockRef: 'Stock ref', lockVersion: 'Save no.',
-  supersededVersionId: 'Replaced version id', fileName: 'File', sizeBytes: 'Size (bytes)', sha256: 'SHA-256'
+  supersededVersionId: 'Replaced version id', fileName: 'File', sizeBytes: 'Size (bytes)', sha256: 'SHA-256',
+  kitId: 'Kit no.', kitName: 'Kit', baselineVersionId: 'Kit baseline version id', baselineVersionNo: 'Kit baseline version',
+  recheckId: 'Re-check no.', result: 'Result', newWarnings: 'New warnings'
 }
 
 export function detailLabel(key: string): string {
