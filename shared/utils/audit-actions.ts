@@ -11,6 +11,7 @@ export const auditActionLabels: Record<string, string> = {
   'version.created': 'Version drafted',
   'version.updated': 'Draft edited',
   'version.edited': 'Draft edited',
+  // Roadside versions recorded before they went through the one insert and submit (docs/version-lifecycle.md).
   'version.roadside-recorded': 'Recorded at the roadside',
   'version.submitted': 'Sent for review',
   'version.withdrawn': 'Withdrawn from review',
