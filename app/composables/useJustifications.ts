@@ -24,8 +24,7 @@ export function useJustifications(warnings: MaybeRefOrGetter<Warning[] | undefin
 
   // Marks the reasons the server asked for (its 400 names them as justifications.<rule>).
   function fromServer(error: unknown) {
-    const fields = (error as { data?: { data?: { fields?: { path: string, message: string }[] } } }).data?.data?.fields ?? []
-    for (const f of fields) if (f.path.startsWith('justifications.')) fieldErrors.value[f.path.slice('justifications.'.length)] = f.message
+    for (const f of apiError(error).data?.fields ?? []) if (f.path.startsWith('justifications.')) fieldErrors.value[f.path.slice('justifications.'.length)] = f.message
   }
 
   return { texts, fieldErrors, dangerRules, collect, fromServer }

@@ -55,6 +55,3 @@ export function requireTransition(v: ProfileVersion, action: VersionAction, user
   return stateAfter(action, state)
 }
 
-export function carName(vehicle: Vehicle) {
-  return `${vehicle.stockRef} ${vehicle.year} ${vehicle.make} ${vehicle.model}`
-}
