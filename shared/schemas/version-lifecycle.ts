@@ -42,6 +42,13 @@ export const versionLifecycle: Record<VersionAction, VersionTransition> = {
 
 export interface Actor { roles: readonly string[], isAuthor: boolean, isDriver?: boolean }
 
+// The permission a route asks for before the table's person and state rules are checked.
+export function routePermission(action: VersionAction): Permission {
+  const permission = versionLifecycle[action].permission
+  if (!permission) throw new Error(`Nobody asks for "${action}" directly: it follows another change.`)
+  return permission
+}
+
 export const allowedFrom = (action: VersionAction, state: VersionState) => versionLifecycle[action].from.includes(state)
 
 export function stateAfter(action: VersionAction, state: VersionState): VersionState {

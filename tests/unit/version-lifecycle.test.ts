@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { versionStates, type VersionState } from '../../shared/schemas/version'
-import { actionsFor, allowedFrom, failedPeopleRules, mayAct, personRefusal, stateAfter, stateRefusal, versionActions, versionLifecycle, type VersionAction } from '../../shared/schemas/version-lifecycle'
+import { actionsFor, allowedFrom, failedPeopleRules, mayAct, personRefusal, routePermission, stateAfter, stateRefusal, versionActions, versionLifecycle, type VersionAction } from '../../shared/schemas/version-lifecycle'
 
 const tuner = { roles: ['tuner'], isAuthor: true }
 const engineer = { roles: ['engineer'], isAuthor: false }
@@ -83,5 +83,14 @@ describe('the version lifecycle table', () => {
     for (const t of Object.values(versionLifecycle)) {
       for (const rule of Object.keys(t.people) as (keyof typeof t.people)[]) expect(personRefusal(t.action, rule).length).toBeGreaterThan(20)
     }
+  })
+})
+
+describe('the permission each route asks for', () => {
+  it('comes from the table, and a change that only follows another one has no route', () => {
+    expect(routePermission('submit')).toBe('versions.write')
+    expect(routePermission('approve')).toBe('versions.review')
+    expect(routePermission('roadside-change')).toBe('road-tests.record')
+    expect(() => routePermission('supersede')).toThrow(/follows another change/)
   })
 })
