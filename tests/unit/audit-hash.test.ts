@@ -1,7 +1,9 @@
 import { createHash } from 'node:crypto'
 import { describe, it, expect } from 'vitest'
 import fc from 'fast-check'
-import { auditHash, auditHashBody, sha256Hex } from '../../server/utils/history/audit'
+// An RFC 8785 implementation from the npm registry, to check ours against (docs/history.md).
+import canonicalize from 'canonicalize'
+import { auditHash, auditHashBody, eventHash, hashedRecord, sha256Hex } from '../../server/utils/history/audit'
 import { canonicalJson } from '../../shared/utils/canonical-json'
 
 const event = {
@@ -59,5 +61,39 @@ describe('the hashed body', () => {
       const { prevHash: _p, ...covered } = e
       expect(auditHashBody(e)).toBe(reference({ ...covered, createdAt: new Date(e.createdAt).toISOString() }))
     }), { numRuns: 300 })
+  })
+})
+
+const formTwo = { ...event, form: 2, actor: { name: 'Dev Carrow', email: 'tuner@voltwright.test' }, prevHash: 'cd'.repeat(32) }
+
+describe('form 2 (docs/history.md)', () => {
+  it('hashes the RFC 8785 form of one record holding the previous hash and who acted, as named then', () => {
+    const record = hashedRecord(formTwo)
+    expect(record).toEqual({
+      form: 2, prevHash: 'cd'.repeat(32), workshopId: 1, vehicleId: 7, actor: { id: 3, name: 'Dev Carrow', email: 'tuner@voltwright.test' },
+      action: 'vehicle.updated', entityType: 'vehicle', entityId: '7', data: event.data, createdAt: '2026-12-01T09:30:00.000Z'
+    })
+    expect(canonicalize(record)).toBe('{"action":"vehicle.updated","actor":{"email":"tuner@voltwright.test","id":3,"name":"Dev Carrow"},"createdAt":"2026-12-01T09:30:00.000Z",'
+      + '"data":{"patch":[{"op":"replace","path":"/status","value":"converting"}]},"entityId":"7","entityType":"vehicle","form":2,"prevHash":"' + 'cd'.repeat(32) + '","vehicleId":7,"workshopId":1}')
+    expect(eventHash(formTwo)).toBe(createHash('sha256').update(canonicalize(record)!, 'utf8').digest('hex'))
+  })
+
+  it('changes with the recorded name, the link and the form', () => {
+    const base = eventHash(formTwo)
+    expect(eventHash({ ...formTwo, actor: { ...formTwo.actor, name: 'Someone Else' } })).not.toBe(base)
+    expect(eventHash({ ...formTwo, prevHash: null })).not.toBe(base)
+    expect(eventHash({ ...formTwo, form: 1 })).toBe(auditHash(formTwo.prevHash, formTwo))
+  })
+
+  it('form 1\'s record, with the previous hash in front, gives form 1\'s hash', () => {
+    const one = { ...formTwo, form: 1 }
+    const record = hashedRecord(one)
+    expect(Object.keys(record)).toEqual(['action', 'actorId', 'createdAt', 'data', 'entityId', 'entityType', 'vehicleId', 'workshopId'])
+    expect(createHash('sha256').update(one.prevHash + canonicalize(record), 'utf8').digest('hex')).toBe(eventHash(one))
+  })
+
+  it('our canonical JSON is RFC 8785 for any JSON value (checked against the canonicalize package)', () => {
+    fc.assert(fc.property(fc.jsonValue(), (v) => { expect(canonicalJson(v)).toBe(canonicalize(v)) }), { numRuns: 1000 })
+    for (const n of [1e21, 1e-7, 0.1 + 0.2, -0, 5e-324, 2 ** 53 + 2, 123456789012345680000]) expect(canonicalJson({ n })).toBe(canonicalize({ n }))
   })
 })
