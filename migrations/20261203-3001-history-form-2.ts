@@ -13,7 +13,7 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
     day: { type: DataTypes.DATEONLY, primaryKey: true },
     headId: { type: DataTypes.BIGINT, allowNull: true },
     headHash: { type: DataTypes.TEXT, allowNull: true },
-    sentAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW }
+    sentAt: { type: DataTypes.DATE, allowNull: false, defaultValue: qi.sequelize.fn('now') }
   })
 }
 

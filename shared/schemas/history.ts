@@ -60,3 +60,6 @@ export interface VerifyResult {
   notedHead?: { id: string, hash: string, ok: boolean, problem: 'missing' | 'changed' | null, message: string }
   durationMs: number
 }
+
+// Asking for the head mail carries nothing (the head is read from the chain): no body, or an empty object.
+export const headMailBodySchema = z.object({}).strict().optional()

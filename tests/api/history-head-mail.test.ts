@@ -54,7 +54,7 @@ describe('the history\'s head, mailed to the auditors', async () => {
   it('claims the day in PostgreSQL: a second claim for the same workshop and day is refused by the database', async () => {
     const bay = await addWorkshop({ auditor: ['auditor'] })
     await expect.poll(() => claimsOf(bay.workshopId), { timeout: 20000, interval: 500 }).toBe(1)
-    const again = await withDatabase(async c => c.query(`INSERT INTO audit_head_mails ("workshopId", day) SELECT "workshopId", day FROM audit_head_mails WHERE "workshopId" = $1 ON CONFLICT DO NOTHING RETURNING 1`, [bay.workshopId]))
+    const again = await withDatabase(async c => c.query(`INSERT INTO audit_head_mails ("workshopId", day, "sentAt") SELECT "workshopId", day, now() FROM audit_head_mails WHERE "workshopId" = $1 ON CONFLICT DO NOTHING RETURNING 1`, [bay.workshopId]))
     expect(again.rowCount).toBe(0)
   })
 })
