@@ -97,3 +97,23 @@ describe('form 2 (docs/history.md)', () => {
     for (const n of [1e21, 1e-7, 0.1 + 0.2, -0, 5e-324, 2 ** 53 + 2, 123456789012345680000]) expect(canonicalJson({ n })).toBe(canonicalize({ n }))
   })
 })
+
+// Real events: the demo seed's 50, written in form 1 by the register before form 2 (commit f90fd11) and read back
+// from its database on 3 December 2026 (tests/unit/fixtures/form-1-demo-events.json).
+describe('form 1, as docs/history.md describes it, on real demo events', async () => {
+  const { default: events } = await import('./fixtures/form-1-demo-events.json') as { default: (Parameters<typeof eventHash>[0] & { id: string, hash: string })[] }
+
+  it('recomputes every hash and link from the eight documented members, with an independent RFC 8785 implementation', () => {
+    expect(events).toHaveLength(50)
+    const prev = new Map<number, string | null>()
+    for (const e of events) {
+      expect(e.prevHash, e.id).toBe(prev.get(e.workshopId) ?? null)
+      const record = { action: e.action, actorId: e.actorId, createdAt: e.createdAt, data: e.data, entityId: e.entityId, entityType: e.entityType, vehicleId: e.vehicleId, workshopId: e.workshopId }
+      expect(createHash('sha256').update((e.prevHash ?? '') + canonicalize(record), 'utf8').digest('hex'), `event ${e.id} ${e.action}`).toBe(e.hash)
+      expect(eventHash(e)).toBe(e.hash)
+      expect(hashedRecord(e)).toEqual(record)
+      prev.set(e.workshopId, e.hash)
+    }
+    expect(new Set(events.map(e => e.action)).size).toBeGreaterThan(10)
+  })
+})
