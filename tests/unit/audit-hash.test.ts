@@ -78,6 +78,12 @@ describe('form 2 (docs/history.md)', () => {
     expect(eventHash(formTwo)).toBe(createHash('sha256').update(canonicalize(record)!, 'utf8').digest('hex'))
   })
 
+  it('gives the worked examples of docs/history.md', () => {
+    // Hashes computed with Node's crypto straight from the texts shown in docs/history.md.
+    expect(eventHash(formTwo)).toBe('b16ee0a38e7dc823502d63f59120a841e142254b9c3a088f546faab57f4261c2')
+    expect(eventHash({ ...formTwo, form: 1 })).toBe('8087aa1e7baadc339b6c01aca5fded185eb42ca3f7dcbef4ee54dc421a2b05d2')
+  })
+
   it('changes with the recorded name, the link and the form', () => {
     const base = eventHash(formTwo)
     expect(eventHash({ ...formTwo, actor: { ...formTwo.actor, name: 'Someone Else' } })).not.toBe(base)
