@@ -61,5 +61,7 @@ export interface VerifyResult {
   durationMs: number
 }
 
-// Asking for the head mail carries nothing (the head is read from the chain): no body, or an empty object.
-export const headMailBodySchema = z.object({}).strict().optional()
+// Asking for the head mail now: to the workshop's auditors and whoever asked (the default), or to the asker only.
+export const headMailBodySchema = z.object({
+  to: z.enum(['auditors', 'me'], { error: 'Either auditors (the workshop\'s auditors and you) or me' }).default('auditors')
+}).strict().optional()

@@ -16,12 +16,14 @@ describe('the history\'s head, mailed to the auditors', async () => {
     const bayAdmin = await signIn(bay.emails.admin!)
     await newCar(bayAdmin)
     expect((await (await signIn(bay.emails.tuner!)).call('POST', '/api/audit/head-mail')).status).toBe(403)
+    expect((await bayAdmin.call('POST', '/api/audit/head-mail', { to: 'me' })).body.sentTo).toBe(1)
+    expect((await bayAdmin.call('POST', '/api/audit/head-mail', { to: 'everyone' })).status).toBe(400)
     const res = await bayAdmin.call('POST', '/api/audit/head-mail')
     expect(res.status).toBe(200)
     expect(res.body.sentTo).toBe(2)
     const line = `${res.body.head.id}:${res.body.head.hash}`
-    for (const address of [bay.emails.auditor!, bay.emails.admin!]) {
-      await expect.poll(async () => (await mailTo(address, 'History head of')).filter(m => m.subject.endsWith('on request')).length, { timeout: 15000, interval: 500 }).toBe(1)
+    for (const [address, count] of [[bay.emails.auditor!, 1], [bay.emails.admin!, 2]] as const) {
+      await expect.poll(async () => (await mailTo(address, 'History head of')).filter(m => m.subject.endsWith('on request')).length, { timeout: 15000, interval: 500 }).toBe(count)
     }
     const [mail] = (await mailTo(bay.emails.auditor!, 'History head of')).filter(m => m.subject.endsWith('on request'))
     expect(mail!.text).toContain(line)

@@ -17,8 +17,8 @@ function headMailText(h: Head, day: string | null): string {
   ].join('\n')
 }
 
-async function mailHead(t: Transaction, h: Head, day: string | null, extra: string[] = []): Promise<number> {
-  const auditors = (await peopleWithRole(h.workshopId, 'auditor', t)).map(p => p.email)
+async function mailHead(t: Transaction, h: Head, day: string | null, extra: string[] = [], toAuditors = true): Promise<number> {
+  const auditors = toAuditors ? (await peopleWithRole(h.workshopId, 'auditor', t)).map(p => p.email) : []
   const to = [...new Set([...auditors, ...extra])]
   const subject = day ? `History head of ${h.workshopName}, ${day}` : `History head of ${h.workshopName}, on request`
   await queueMail(t, to.map(address => ({ workshopId: h.workshopId, to: address, subject, text: headMailText(h, day) })))
@@ -28,11 +28,11 @@ async function mailHead(t: Transaction, h: Head, day: string | null, extra: stri
 const HEAD_SQL = `SELECT w.id AS "workshopId", w.name AS "workshopName", h.id AS "headId", h.hash AS "headHash" FROM workshops w
   LEFT JOIN LATERAL (SELECT id, hash FROM audit_events WHERE "workshopId" = w.id ORDER BY id DESC LIMIT 1) h ON true`
 
-// On request: the head now, to the workshop's auditors and to whoever asked.
-export async function mailHeadNow(user: SignedIn) {
+// On request: the head now, to the workshop's auditors and to whoever asked, or to the asker only.
+export async function mailHeadNow(user: SignedIn, to: 'auditors' | 'me') {
   return useDatabase().transaction(async (t) => {
     const [h] = await useDatabase().query<Head>(`${HEAD_SQL} WHERE w.id = :w`, { replacements: { w: user.workshopId }, type: QueryTypes.SELECT, transaction: t })
-    const sentTo = await mailHead(t, h!, null, [user.email])
+    const sentTo = await mailHead(t, h!, null, [user.email], to === 'auditors')
     return { head: h!.headId ? { id: String(h!.headId), hash: h!.headHash! } : null, sentTo }
   })
 }
