@@ -15,6 +15,7 @@ import type { Role } from '../../shared/schemas/roles'
 // bodies always put a wrong value there, so none can be accepted and change the demo workshop.
 type Kind = 'string' | 'number' | 'boolean' | 'array' | 'object'
 const bodyField: Record<string, [string, Kind]> = {
+  'audit/head-mail.post.ts': ['to', 'string'],
   'auth/login.post.ts': ['email', 'string'],
   'evaluate.post.ts': ['platformKey', 'string'],
   'platforms/index.post.ts': ['motorMaxRpm', 'number'],
@@ -39,13 +40,14 @@ const bodyField: Record<string, [string, Kind]> = {
 const queryKeys: Record<string, string[]> = {
   'attachments/[id].get.ts': ['size'],
   'audit/events.csv.get.ts': ['cursor', 'limit', 'action', 'actorId', 'from', 'to', 'vehicleId'],
-  'audit/events.get.ts': ['cursor', 'limit', 'action', 'actorId', 'from', 'to', 'vehicleId'],
+  'audit/events.get.ts': ['cursor', 'limit', 'action', 'actorId', 'from', 'to', 'vehicleId', 'include'],
   'audit/facets.get.ts': ['vehicleId'],
+  'audit/verify.get.ts': ['head'],
   'road-tests/[id]/photos.post.ts': ['caption'],
   'snags/[id]/photos.post.ts': ['caption'],
   'snags/index.get.ts': ['kind', 'status', 'priority', 'blocking', 'assigneeId'],
   'vehicles/[id]/history.csv.get.ts': ['cursor', 'limit', 'action', 'actorId', 'from', 'to'],
-  'vehicles/[id]/history.get.ts': ['cursor', 'limit', 'action', 'actorId', 'from', 'to'],
+  'vehicles/[id]/history.get.ts': ['cursor', 'limit', 'action', 'actorId', 'from', 'to', 'include'],
   'vehicles/[id]/snags.get.ts': ['kind', 'status', 'priority', 'blocking', 'assigneeId'],
   'vehicles/index.get.ts': ['q', 'status', 'sort', 'dir', 'page', 'pageSize']
 }

@@ -2,15 +2,16 @@ import { QueryTypes } from 'sequelize'
 import type { HistoryEntry, HistoryPage, HistoryQuery } from '../../../shared/schemas/history'
 import { changeRows, copyState, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
 import { useDatabase } from '../database/db'
+import { hashedRecord, type RecordedActor } from './audit'
 
 export interface HistoryScope { workshopId: number, vehicleId?: number }
 
 interface EventRow {
-  id: string, vehicleId: number | null, actorId: number | null, action: string, entityType: string, entityId: string
+  id: string, form: number, workshopId: number, vehicleId: number | null, actorId: number | null, actor: RecordedActor | null, action: string, entityType: string, entityId: string
   data: Record<string, unknown>, createdAt: Date, prevHash: string | null, hash: string, actorName: string | null, stockRef: string | null
 }
 
-const SELECT = `SELECT e.id, e."vehicleId", e."actorId", e.action, e."entityType", e."entityId", e.data, e."createdAt", e."prevHash", e.hash,
+const SELECT = `SELECT e.id, e.form, e."workshopId", e."vehicleId", e."actorId", e.actor, e.action, e."entityType", e."entityId", e.data, e."createdAt", e."prevHash", e.hash,
   u.name AS "actorName", v."stockRef"
   FROM audit_events e LEFT JOIN users u ON u.id = e."actorId" LEFT JOIN vehicles v ON v.id = e."vehicleId"`
 
@@ -88,13 +89,21 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
   return states
 }
 
-async function toEntries(workshopId: number, rows: EventRow[], complete: boolean): Promise<HistoryEntry[]> {
+// Who acted: the name the event recorded (form 2), else the person's name today (form 1 kept only the id).
+function actorOf(r: EventRow): HistoryEntry['actor'] {
+  if (r.actorId === null) return null
+  if (r.actor?.name) return { id: r.actorId, name: r.actor.name, recorded: true }
+  return { id: r.actorId, name: r.actorName ?? 'someone no longer listed', recorded: false }
+}
+
+async function toEntries(workshopId: number, rows: EventRow[], complete: boolean, withRecord: boolean): Promise<HistoryEntry[]> {
   const folds = await foldedStates(workshopId, rows, complete)
   return rows.map(r => ({
     id: String(r.id), createdAt: new Date(r.createdAt).toISOString(), action: r.action, entityType: r.entityType, entityId: r.entityId,
     vehicle: r.vehicleId ? { id: r.vehicleId, stockRef: r.stockRef ?? '' } : null,
-    actor: r.actorId ? { id: r.actorId, name: r.actorName ?? 'someone no longer listed' } : null,
-    changes: changeRows(r.data, folds.get(String(r.id))), details: eventDetails(r.data), hash: r.hash, prevHash: r.prevHash
+    actor: actorOf(r),
+    changes: changeRows(r.data, folds.get(String(r.id))), details: eventDetails(r.data), hash: r.hash, prevHash: r.prevHash, form: r.form,
+    ...(withRecord ? { record: hashedRecord(r) } : {})
   }))
 }
 
@@ -104,7 +113,7 @@ export async function readHistory(scope: HistoryScope, q: HistoryQuery): Promise
   const rows = await useDatabase().query<EventRow>(`${SELECT} WHERE ${where} ORDER BY e.id DESC LIMIT :limit`,
     { replacements: { ...replacements, limit: q.limit + 1 }, type: QueryTypes.SELECT })
   const page = rows.slice(0, q.limit)
-  const items = await toEntries(scope.workshopId, page, !q.action && !q.actorId && !q.from && !q.to)
+  const items = await toEntries(scope.workshopId, page, !q.action && !q.actorId && !q.from && !q.to, q.include === 'record')
   return { items, nextCursor: rows.length > q.limit ? items[items.length - 1]!.id : null }
 }
 
