@@ -29,8 +29,12 @@ export default defineNuxtConfig({
     s3Bucket: 'voltwright',
     s3AccessKeyId: '',
     s3SecretAccessKey: '',
+    s3Region: 'us-east-1',
     smtpHost: '127.0.0.1',
     smtpPort: 1025,
+    smtpTls: 'none',
+    smtpUser: '',
+    smtpPassword: '',
     mailFrom: 'Voltwright <register@voltwright.test>',
     // A sign-in lasts a working day: after 12 hours the sealed cookie no longer opens.
     session: { maxAge: 60 * 60 * 12 },
