@@ -14,8 +14,9 @@ const floorBase = `http://127.0.0.1:${floorPort}`
 const DURATION = Number(process.env.BENCH_SECONDS || 5)
 const ROUNDS = Number(process.env.BENCH_ROUNDS || 3)
 const CONNECTIONS = 32
-const P95_AIM_MS = 50
-const RATIO_AIM = 0.6
+// The aim, against the floor measured in the same run: at least 80 % of its throughput, p95 within 1.25× of its p95.
+const RATIO_AIM = 0.8
+const P95_AIM = 1.25
 const bin = (name) => join(root, 'node_modules', '.bin', name)
 const sql = (text) => psql(config.pgPort, text, 'voltwright')
 
@@ -46,11 +47,11 @@ function report(rows, load) {
   let ratioMet = 0
   const lines = rows.map(({ name, product: p, floor: f, ratio }) => {
     const clean = p.non2xx === 0 && p.errors === 0
-    const fast = clean && p.p95 < P95_AIM_MS
+    const fast = clean && p.p95 <= P95_AIM * f.p95
     const close = clean && ratio >= RATIO_AIM
     latencyMet += fast ? 1 : 0
     ratioMet += close ? 1 : 0
-    return `| ${name} | ${rps(p.reqPerSec)} | ${ms(p.p50)} | ${ms(p.p95)} | ${ms(p.p99)} | ${p.non2xx} | ${rps(f.reqPerSec)} | ${ms(f.p50)} | ${ms(f.p95)} | ${ms(f.p99)} | ${f.non2xx} | ${(ratio * 100).toFixed(0)} % | ${yes(fast)} | ${yes(close)} |`
+    return `| ${name} | ${rps(p.reqPerSec)} | ${ms(p.p50)} | ${ms(p.p95)} | ${ms(p.p99)} | ${p.non2xx} | ${rps(f.reqPerSec)} | ${ms(f.p50)} | ${ms(f.p95)} | ${ms(f.p99)} | ${f.non2xx} | ${(ratio * 100).toFixed(0)} % | ${(p.p95 / f.p95).toFixed(2)}× | ${yes(close)} | ${yes(fast)} |`
   })
   return `# Voltwright under load
 
@@ -65,15 +66,16 @@ shared/compute \`evaluate\` directly on the car's spec; the diff evaluates both 
 the product's row and figure tables. The product's extra cost is the framework, the sealed-session cookie with
 its user lookup, zod, the ajv schema check and the fuller answers.
 
-Aim: p95 under ${P95_AIM_MS} ms on each route and at least ${RATIO_AIM * 100} % of the floor's throughput.
+Where the time goes (CPU profiles of the built server under this load): [PROFILE.md](PROFILE.md).
 
-| Route | Product req/s | p50 | p95 | p99 | non-2xx | Floor req/s | p50 | p95 | p99 | non-2xx | Product / floor | p95 under ${P95_AIM_MS} ms | ${RATIO_AIM * 100} % of the floor |
-|---|---|---|---|---|---|---|---|---|---|---|---|---|---|
+Aim, on each route, against the floor measured in the same run: at least ${RATIO_AIM * 100} % of its throughput, and a p95
+within ${P95_AIM}× of its p95.
+
+| Route | Product req/s | p50 | p95 | p99 | non-2xx | Floor req/s | p50 | p95 | p99 | non-2xx | Product / floor | p95 product / floor | ${RATIO_AIM * 100} % of the floor | p95 within ${P95_AIM}× |
+|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|
 ${lines.join('\n')}
 
-The p95 aim is met on ${latencyMet} of ${rows.length} routes, the throughput aim on ${ratioMet} of ${rows.length}. With ${CONNECTIONS} connections always busy, a p95 under ${P95_AIM_MS} ms needs
-roughly ${CONNECTIONS} / ${P95_AIM_MS / 1000} s = ${Math.round(CONNECTIONS / (P95_AIM_MS / 1000))} req/s (Little's law); the floor's own throughput shows what this machine
-allowed at the time, so where even the floor misses the latency aim the ratio is the meaningful figure.
+The throughput aim is met on ${ratioMet} of ${rows.length} routes, the p95 aim on ${latencyMet} of ${rows.length}.
 
 Machine: ${cpus().length} CPUs (${cpus()[0]?.model ?? 'unknown'}), Node ${process.version}. Load average (1, 5, 15 min)
 before the runs: ${load.before.map(l => l.toFixed(2)).join(', ')}; after: ${loadavg().map(l => l.toFixed(2)).join(', ')}.
