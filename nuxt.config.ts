@@ -47,6 +47,8 @@ export default defineNuxtConfig({
     // IBM Plex Sans for the handover PDF, as WOFF (pdfkit cannot read WOFF2; PACKAGES.md).
     serverAssets: [{ baseName: 'fonts', dir: fileURLToPath(new URL('./node_modules/@fontsource/ibm-plex-sans/files', import.meta.url)), pattern: 'ibm-plex-sans-latin*-{400,600}-normal.woff' }]
   },
+  // JSON answers carry no script or style to which a CSP nonce could apply: none is drawn for them.
+  routeRules: { '/api/**': { security: { nonce: false } } },
   security: {
     headers: {
       contentSecurityPolicy: {
