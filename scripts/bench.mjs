@@ -1,6 +1,7 @@
 // `npm run bench`: the product under load beside a bare handler running the same SQL, written to bench/REPORT.md.
 // Its own stack on its own ports and a data folder that persists (.bench-data), so the big seed is written once.
-import { mkdirSync, writeFileSync } from 'node:fs'
+import { execFileSync } from 'node:child_process'
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs'
 import { loadavg, cpus } from 'node:os'
 import { join } from 'node:path'
 import { root, stackConfig } from './lib/config.mjs'
@@ -32,12 +33,26 @@ async function expectOk(url, init) {
 }
 
 const ms = (x) => x === null ? '–' : `${x.toFixed(1)} ms`
+const cpuMs = (x) => x === null ? '–' : `${x.toFixed(2)} ms`
+
+// A process's own CPU time so far, in µs: the product's from /proc (Linux), the floor's as it reports it.
+// Unlike throughput on a shared machine, the CPU an answer costs hardly moves with other work's load.
+let ticksPerSecond = 100
+try { ticksPerSecond = Number(execFileSync('getconf', ['CLK_TCK'], { encoding: 'utf8' })) || 100 } catch { /* the usual value */ }
+function procCpu(pid) {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ')
+    return (Number(fields[11]) + Number(fields[12])) * 1e6 / ticksPerSecond
+  } catch { return null }
+}
+const floorCpu = async () => (await (await fetch(`${floorBase}/cpu`)).json()).micros
 const rps = (x) => Math.round(x).toLocaleString('en-GB')
 
 const yes = (ok) => ok ? 'met' : '**not met**'
 const median = (xs) => [...xs].sort((a, b) => a - b)[xs.length >> 1]
 // Each figure the median of the rounds; errors and non-2xx answers summed, so one bad round shows.
 const medianRun = (runs) => ({
+  cpuMs: runs.some(m => m.cpuMs === null) ? null : median(runs.map(m => m.cpuMs)),
   reqPerSec: median(runs.map(m => m.reqPerSec)), p50: median(runs.map(m => m.p50)), p95: median(runs.map(m => m.p95)), p99: median(runs.map(m => m.p99)),
   non2xx: runs.reduce((n, m) => n + m.non2xx, 0), errors: runs.reduce((n, m) => n + m.errors, 0)
 })
@@ -51,7 +66,7 @@ function report(rows, load) {
     const close = clean && ratio >= RATIO_AIM
     latencyMet += fast ? 1 : 0
     ratioMet += close ? 1 : 0
-    return `| ${name} | ${rps(p.reqPerSec)} | ${ms(p.p50)} | ${ms(p.p95)} | ${ms(p.p99)} | ${p.non2xx} | ${rps(f.reqPerSec)} | ${ms(f.p50)} | ${ms(f.p95)} | ${ms(f.p99)} | ${f.non2xx} | ${(ratio * 100).toFixed(0)} % | ${(p.p95 / f.p95).toFixed(2)}× | ${yes(close)} | ${yes(fast)} |`
+    return `| ${name} | ${rps(p.reqPerSec)} | ${ms(p.p50)} | ${ms(p.p95)} | ${ms(p.p99)} | ${p.non2xx} | ${rps(f.reqPerSec)} | ${ms(f.p50)} | ${ms(f.p95)} | ${ms(f.p99)} | ${f.non2xx} | ${(ratio * 100).toFixed(0)} % | ${(p.p95 / f.p95).toFixed(2)}× | ${yes(close)} | ${yes(fast)} | ${cpuMs(p.cpuMs)} | ${cpuMs(f.cpuMs)} | ${p.cpuMs && f.cpuMs ? `${(100 * f.cpuMs / p.cpuMs).toFixed(0)} %` : '–'} |`
   })
   return `# Voltwright under load
 
@@ -71,11 +86,16 @@ Where the time goes (CPU profiles of the built server under this load): [PROFILE
 Aim, on each route, against the floor measured in the same run: at least ${RATIO_AIM * 100} % of its throughput, and a p95
 within ${P95_AIM}× of its p95.
 
-| Route | Product req/s | p50 | p95 | p99 | non-2xx | Floor req/s | p50 | p95 | p99 | non-2xx | Product / floor | p95 product / floor | ${RATIO_AIM * 100} % of the floor | p95 within ${P95_AIM}× |
-|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|
+| Route | Product req/s | p50 | p95 | p99 | non-2xx | Floor req/s | p50 | p95 | p99 | non-2xx | Product / floor | p95 product / floor | ${RATIO_AIM * 100} % of the floor | p95 within ${P95_AIM}× | CPU per answer, product | floor | floor / product CPU |
+|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|
 ${lines.join('\n')}
 
 The throughput aim is met on ${ratioMet} of ${rows.length} routes, the p95 aim on ${latencyMet} of ${rows.length}.
+
+"CPU per answer" is the server process's own CPU time over a round divided by the answers it gave (the
+product's read from /proc, the floor's from its own \`process.cpuUsage()\`; the database's share is in
+neither). It moves little with the machine's load, unlike throughput; "floor / product CPU" is the share of
+the floor's throughput the product would reach where the Node process alone set the pace.
 
 Machine: ${cpus().length} CPUs (${cpus()[0]?.model ?? 'unknown'}), Node ${process.version}. Load average (1, 5, 15 min)
 before the runs: ${load.before.map(l => l.toFixed(2)).join(', ')}; after: ${loadavg().map(l => l.toFixed(2)).join(', ')}.
@@ -92,7 +112,7 @@ function addBigSeed(env) {
 }
 
 try {
-  const { env } = await bringUp(config, { afterSeed: addBigSeed })
+  const { env, server } = await bringUp(config, { afterSeed: addBigSeed })
   const { measure } = await import('./lib/load.mjs') // autocannon is there only once the dependencies are
   startChild('floor', bin('tsx'), [join(root, 'scripts', 'bench-floor.ts')], { env: { ...env, FLOOR_PORT: String(floorPort) }, cwd: root })
   await waitForHttp(`${floorBase}/health`)
@@ -123,9 +143,13 @@ try {
     const runs = { product: [], floor: [] }
     for (let round = 0; round < ROUNDS; round++) {
       for (const side of ['product', 'floor']) {
+        const cpu = side === 'product' ? async () => procCpu(server.pid) : floorCpu
+        const cpuBefore = await cpu()
         const m = await measure({ ...r[side], connections: CONNECTIONS, duration: DURATION })
+        const cpuAfter = await cpu()
+        m.cpuMs = cpuBefore === null || cpuAfter === null ? null : (cpuAfter - cpuBefore) / 1000 / m.requests
         runs[side].push(m)
-        console.log(`[bench] ${r.name} ${side} round ${round + 1}: ${rps(m.reqPerSec)} req/s, p50 ${ms(m.p50)}, p95 ${ms(m.p95)}, p99 ${ms(m.p99)}, ${m.non2xx} non-2xx`)
+        console.log(`[bench] ${r.name} ${side} round ${round + 1}: ${rps(m.reqPerSec)} req/s, p50 ${ms(m.p50)}, p95 ${ms(m.p95)}, p99 ${ms(m.p99)}, ${m.non2xx} non-2xx, CPU ${cpuMs(m.cpuMs)} per answer`)
       }
     }
     const ratios = runs.product.map((p, i) => p.reqPerSec / runs.floor[i].reqPerSec)
