@@ -94,7 +94,8 @@ The throughput aim is met on ${ratioMet} of ${rows.length} routes, the p95 aim o
 
 "CPU per answer" is the server process's own CPU time over a round divided by the answers it gave (the
 product's read from /proc, the floor's from its own \`process.cpuUsage()\`; the database's share is in
-neither). It moves little with the machine's load, unlike throughput; "floor / product CPU" is the share of
+neither). It moves less with the machine's load than throughput does (on this shared sandbox still by up to
+half between runs); "floor / product CPU" is the share of
 the floor's throughput the product would reach where the Node process alone set the pace.
 
 Machine: ${cpus().length} CPUs (${cpus()[0]?.model ?? 'unknown'}), Node ${process.version}. Load average (1, 5, 15 min)
