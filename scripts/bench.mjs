@@ -36,7 +36,7 @@ const ms = (x) => x === null ? '–' : `${x.toFixed(1)} ms`
 const cpuMs = (x) => x === null ? '–' : `${x.toFixed(2)} ms`
 
 // A process's own CPU time so far, in µs: the product's from /proc (Linux), the floor's as it reports it.
-// Unlike throughput on a shared machine, the CPU an answer costs hardly moves with other work's load.
+// The CPU an answer costs moves less with other work's load than throughput does.
 let ticksPerSecond = 100
 try { ticksPerSecond = Number(execFileSync('getconf', ['CLK_TCK'], { encoding: 'utf8' })) || 100 } catch { /* the usual value */ }
 function procCpu(pid) {
