@@ -29,8 +29,12 @@ export default defineNuxtConfig({
     s3Bucket: 'voltwright',
     s3AccessKeyId: '',
     s3SecretAccessKey: '',
+    s3Region: 'us-east-1',
     smtpHost: '127.0.0.1',
     smtpPort: 1025,
+    smtpTls: 'none',
+    smtpUser: '',
+    smtpPassword: '',
     mailFrom: 'Voltwright <register@voltwright.test>',
     // A sign-in lasts a working day: after 12 hours the sealed cookie no longer opens.
     session: { maxAge: 60 * 60 * 12 },
@@ -43,6 +47,8 @@ export default defineNuxtConfig({
     // IBM Plex Sans for the handover PDF, as WOFF (pdfkit cannot read WOFF2).
     serverAssets: [{ baseName: 'fonts', dir: fileURLToPath(new URL('./node_modules/@fontsource/ibm-plex-sans/files', import.meta.url)), pattern: 'ibm-plex-sans-latin*-{400,600}-normal.woff' }]
   },
+  // JSON answers carry no script or style to which a CSP nonce could apply: none is drawn for them.
+  routeRules: { '/api/**': { security: { nonce: false } } },
   security: {
     headers: {
       contentSecurityPolicy: {

@@ -55,7 +55,9 @@ try {
     VOLTWRIGHT_PG_PORT: String(config.pgPort),
     VOLTWRIGHT_MAIL_SINK: JSON.stringify({ pid: mailSink.pid, command: mailSink.spawnargs }),
     VOLTWRIGHT_OBJECT_STORE: JSON.stringify({ pid: objectStore.pid, command: objectStore.spawnargs }),
-    VOLTWRIGHT_RESTARTED_DIR: restartedDir
+    VOLTWRIGHT_RESTARTED_DIR: restartedDir,
+    // tests/api/instances.test.ts starts a second server instance from the same build on this port.
+    VOLTWRIGHT_SECOND_PORT: process.env.SECOND_PORT || String(config.port + 1)
   }
   await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api', ...apiFiles], { cwd: root, env: testEnv }) }, 'api')
   await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
