@@ -60,16 +60,19 @@ describe('POST /api/evaluate', async () => {
     expect(res.body.figures.zeroTo50S).toBeGreaterThan(0)
   })
 
-  it('reports an inverted derate band, a missing, a non-numeric and an unknown setting', async () => {
+  it('reports an inverted derate band, a missing and a non-numeric setting; refuses an unknown one outright', async () => {
     const { batteryChargeLimitA: _gone, ...missingOne } = defaults
     const res = await tuner.call('POST', '/api/evaluate', {
       vehicleId: car101.id, platformKey: 'fenlow-45',
-      parameters: { ...missingOne, motorDerateStartC: 150, motorCutoffC: 140, creepTorqueNm: 'lots', boostMode: 1 }
+      parameters: { ...missingOne, motorDerateStartC: 150, motorCutoffC: 140, creepTorqueNm: 'lots' }
     })
     expect(res.status).toBe(200)
     expect(res.body.valid).toBe(false)
     const p = paths(res.body.errors)
-    for (const path of ['parameters.motorDerateStartC', 'parameters.batteryChargeLimitA', 'parameters.creepTorqueNm', 'parameters.boostMode']) expect(p).toContain(path)
+    for (const path of ['parameters.motorDerateStartC', 'parameters.batteryChargeLimitA', 'parameters.creepTorqueNm']) expect(p).toContain(path)
+    const unknown = await tuner.call('POST', '/api/evaluate', { vehicleId: car101.id, platformKey: 'fenlow-45', parameters: { ...defaults, boostMode: 1 } })
+    expect(unknown.status).toBe(400)
+    expect(paths(unknown.body.data.fields)).toEqual(['parameters.boostMode'])
     expect(res.body.errors.find((e: { path: string }) => e.path === 'parameters.motorDerateStartC').message).toMatch(/below/)
     expect(new Set(p).size).toBe(p.length) // ajv's findings are not reported twice
     expect(res.body.figures.testMassKg).toBe(1055)
