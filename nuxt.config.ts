@@ -1,5 +1,7 @@
 import { fileURLToPath } from 'node:url'
 
+const NON_PAGE_CSP = "default-src 'none'; frame-ancestors 'none'"
+
 // Voltwright: Nuxt 4 app, Nitro server routes, PostgreSQL through Sequelize.
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
@@ -32,9 +34,17 @@ export default defineNuxtConfig({
     smtpHost: '127.0.0.1',
     smtpPort: 1025,
     mailFrom: 'Voltwright <register@voltwright.test>',
+    // Reverse proxies whose X-Forwarded-For names the client for sign-in limits (NUXT_TRUSTED_PROXIES, README).
+    trustedProxies: '',
     // A sign-in lasts a working day: after 12 hours the sealed cookie no longer opens.
     session: { maxAge: 60 * 60 * 12 },
     public: { baseUrl: 'http://localhost:3000' }
+  },
+  // Answers that are not pages (JSON, CSV, PDF, files, scripts) run nothing: a policy that allows nothing, rather
+  // than the pages' policy with its nonce placeholder unfilled (docs/security.md).
+  routeRules: {
+    '/api/**': { headers: { 'Content-Security-Policy': NON_PAGE_CSP } },
+    '/_nuxt/**': { headers: { 'Content-Security-Policy': NON_PAGE_CSP } }
   },
   nitro: {
     // Sequelize loads its dialect by name at run time; pdfkit reads its font data and sharp loads its

@@ -73,7 +73,7 @@ describe('drive-unit schemas and evaluate under hostile input', async () => {
     const deep = `{"vehicleId":${car.id},"platformKey":"fenlow-45","parameters":{"powerCapKw":${'['.repeat(5000)}${']'.repeat(5000)}}}`
     const nested = await tuner.call('POST', '/api/evaluate', deep)
     expect(nested.status).toBe(400)
-    expect(nested.body.message).toMatch(/deeper than 5 levels/)
+    expect(nested.body.message).toMatch(/body nests deeper than 5 levels/)
     const shallowObject = await tuner.call('POST', '/api/evaluate', { vehicleId: car.id, platformKey: 'fenlow-45', parameters: { ...defaults, powerCapKw: { a: 1 } } })
     expect(shallowObject.status).toBe(400)
     expect(shallowObject.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['parameters.powerCapKw'])

@@ -23,19 +23,21 @@ async function readCapped(event: H3Event, limits: BodyLimits): Promise<string> {
 }
 
 // How deep the value nests and how many keys and items it holds, counted without recursion.
-export function jsonShape(value: unknown): { depth: number, keys: number } {
+export function jsonShape(value: unknown): { depth: number, keys: number, protoKey: boolean } {
   let depth = 0
   let keys = 0
+  let protoKey = false
   const stack: [unknown, number][] = [[value, 0]]
   while (stack.length) {
     const [node, level] = stack.pop()!
     if (node === null || typeof node !== 'object') continue
     depth = Math.max(depth, level + 1)
+    if (!Array.isArray(node) && Object.hasOwn(node, '__proto__')) protoKey = true
     const children = Array.isArray(node) ? node : Object.values(node)
     keys += children.length
     for (const c of children) stack.push([c, level + 1])
   }
-  return { depth, keys }
+  return { depth, keys, protoKey }
 }
 
 // A JSON body for a route that runs on every keystroke: small, shallow and few-keyed, refused otherwise
@@ -48,7 +50,8 @@ export async function readSmallJsonBody(event: H3Event, limits: BodyLimits): Pro
   }
   const shape = jsonShape(body)
   if (shape.depth > limits.maxDepth || shape.keys > limits.maxKeys) {
-    throw createError({ statusCode: 400, message: `The request nests deeper than ${limits.maxDepth} levels or holds more than ${limits.maxKeys} values.`, data: { maxDepth: limits.maxDepth, maxKeys: limits.maxKeys } })
+    throw createError({ statusCode: 400, message: `The request body nests deeper than ${limits.maxDepth} levels or holds more than ${limits.maxKeys} values.`, data: { maxDepth: limits.maxDepth, maxKeys: limits.maxKeys } })
   }
+  if (shape.protoKey) throw createError({ statusCode: 400, message: 'The request body holds a key named "__proto__", which is refused.' })
   return body
 }
