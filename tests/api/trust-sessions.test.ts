@@ -6,7 +6,7 @@ import { useRunningServer, signIn, anonymous, unique, type Caller } from './help
 
 const PASSWORD = 'first-password-123'
 
-describe('sessions after changes to the person', async () => {
+describe('sessions after changes to the person, and the policy on answers', async () => {
   await useRunningServer()
   const admin = await signIn('admin@voltwright.test')
   const newPerson = async (roles = ['tuner']) => {
@@ -61,22 +61,22 @@ describe('sessions after changes to the person', async () => {
     expect(secondId).toMatch(/^[0-9a-f-]{36}$/)
     expect(secondId).not.toBe(firstId)
   })
-})
 
-describe('content security policy on answers that are not pages', async () => {
-  await useRunningServer()
   const tuner = await signIn('tuner@voltwright.test')
 
-  it('JSON, errors and scripts carry no policy with an unfilled nonce placeholder', async () => {
-    const answers = [await tuner.call('GET', '/api/auth/me'), await anonymous.call('GET', '/api/auth/me'), await tuner.call('GET', '/api/_auth/session')]
-    for (const res of answers) {
-      const csp = res.headers.get('content-security-policy') ?? ''
-      expect(csp).not.toContain('{{nonce}}')
-      expect(csp).toContain('default-src \'none\'')
+  it('answers that are not pages: JSON, errors and scripts carry no policy with an unfilled nonce placeholder', async () => {
+    for (const res of [await tuner.call('GET', '/api/auth/me'), await tuner.call('GET', '/api/_auth/session')]) {
+      expect(res.status).toBe(200)
+      expect(res.headers.get('content-security-policy')).toBe('default-src \'none\'; frame-ancestors \'none\'')
     }
+    // An error answer carries the server's own error policy, which allows no script either.
+    const refused = await anonymous.call('GET', '/api/auth/me')
+    expect(refused.status).toBe(401)
+    expect(refused.headers.get('content-security-policy') ?? '').not.toContain('{{nonce}}')
+    expect(refused.headers.get('content-security-policy') ?? '').toMatch(/(script|default)-src 'none'/)
   })
 
-  it('pages keep their policy, with a real nonce', async () => {
+  it('pages keep their content security policy, with a real nonce', async () => {
     const page = await anonymous.call('GET', '/login', undefined, { accept: 'text/html' })
     const csp = page.headers.get('content-security-policy') ?? ''
     expect(csp).toMatch(/'nonce-[A-Za-z0-9+/=_-]{16,}'/)

@@ -52,6 +52,6 @@ export async function readSmallJsonBody(event: H3Event, limits: BodyLimits): Pro
   if (shape.depth > limits.maxDepth || shape.keys > limits.maxKeys) {
     throw createError({ statusCode: 400, message: `The request body nests deeper than ${limits.maxDepth} levels or holds more than ${limits.maxKeys} values.`, data: { maxDepth: limits.maxDepth, maxKeys: limits.maxKeys } })
   }
-  if (shape.protoKey) throw createError({ statusCode: 400, message: 'The request body holds a key named "__proto__", which is refused.' })
+  if (shape.protoKey) throw createError({ statusCode: 400, message: 'The request body\'s JSON holds a key named "__proto__", which is refused.' })
   return body
 }
