@@ -3,7 +3,7 @@
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase, unique } from './helpers'
 import { defaultParameters, fenlow45 } from '../../shared/platforms'
-import { newCar } from './fixtures'
+import { addOnCarProfile, newCar } from './fixtures'
 
 const defaults = defaultParameters(fenlow45)
 const CATASTROPHIC = '^(a+)+$' // nested quantifiers: exponential backtracking on "aaaa…b"
@@ -87,5 +87,13 @@ describe('drive-unit schemas and evaluate under hostile input', async () => {
     const edited = await tuner.call('PATCH', `/api/versions/${profile.body.id}`, { lockVersion: profile.body.lockVersion, parameters: { ...defaults, boostKw: 20 } })
     expect(edited.status).toBe(400)
     expect(JSON.stringify(edited.body.data.fields)).toMatch(/boostKw/)
+  })
+
+  it('still reads a version stored with a setting the drive unit does not have, and reports it as an error', async () => {
+    const { versionId } = await addOnCarProfile(car.id, { name: unique('Old').slice(0, 30), parameters: { ...defaults, boostKw: 20 } })
+    const res = await tuner.call('GET', `/api/versions/${versionId}`)
+    expect(res.status).toBe(200)
+    expect(res.body.liveEvaluation.valid).toBe(false)
+    expect(res.body.liveEvaluation.errors.map((e: { path: string }) => e.path)).toContain('parameters.boostKw')
   })
 })

@@ -22,7 +22,8 @@ function ajvPath(e: ErrorObject): string {
   return name ? `parameters.${name}` : 'parameters'
 }
 
-// Settings the drive unit's schema does not define are refused outright, before any check of their values.
+// Settings the drive unit's schema does not define are refused outright where they come in (evaluate, read-backs),
+// before any check of their values.
 export function assertKnownSettings(platform: PlatformLike, parameters: Record<string, unknown>, prefix = 'parameters') {
   const unknown = unknownSettings(platform.schema, Object.keys(parameters))
   if (!unknown.length) return
@@ -32,10 +33,16 @@ export function assertKnownSettings(platform: PlatformLike, parameters: Record<s
 }
 
 // The server's evaluation: the shared computation, plus the platform's JSON Schema checked by ajv
-// (compiled once per platform). A field evaluate already flagged is not reported twice.
+// (compiled once per platform). A field evaluate already flagged is not reported twice. Settings the schema does
+// not define (in data stored before they were refused) are reported as errors and never reach ajv.
 export function evaluateOnServer(spec: VehicleSpec, platform: PlatformLike, parameters: Record<string, unknown>, settings: WorkshopSettings): Evaluation {
-  assertKnownSettings(platform, parameters)
   const result = evaluate(spec, platform, parameters, settings)
+  const unknown = unknownSettings(platform.schema, Object.keys(parameters))
+  if (unknown.length) {
+    const seen = new Set(result.errors.map(e => e.path))
+    const extra = unknown.map(n => ({ path: `parameters.${n}`, message: `Not a setting of the ${platform.name}` })).filter(e => !seen.has(e.path))
+    return { ...result, valid: false, errors: [...result.errors, ...extra] }
+  }
   const validate = compileParameterValidator(platform)
   if (!validate) {
     const error = { path: 'platform.schema', message: `The ${platform.name}'s schema uses keywords Voltwright no longer accepts; the workshop manager should upload it again` }
