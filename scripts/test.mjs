@@ -44,6 +44,8 @@ try {
   onShutdown(() => stopRestarted(restartedDir))
   // The fault tests stop the mail and object-store stand-ins and start them again (tests/api/services.ts):
   // not fatal here, and what they start is recorded in the data folder and stopped with the rest.
+  // The tests speak as the reverse proxy on this machine, so that X-Forwarded-For can name other clients (tests/api/trust-sign-in.test.ts).
+  process.env.NUXT_TRUSTED_PROXIES ??= '127.0.0.1,::1'
   const { env, pgDir, mailSink, objectStore } = await bringUp(config, { step, fsync: 'off', seedTwice: true, servicesCritical: false })
   const testEnv = {
     ...env,

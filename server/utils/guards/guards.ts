@@ -7,8 +7,8 @@ import { selectRows } from '../database/db'
 
 export interface SignedIn { id: number, workshopId: number, email: string, name: string, roles: Role[] }
 
-// The session says who signed in; the database says whether they still may: deactivation and signing out
-// take effect at once, for every copy of the cookie.
+// The session says who signed in; the database says whether they still may: deactivation, a password change
+// (both raise the person's session epoch) and signing out take effect at once, for every copy of the cookie.
 export async function requireUser(event: H3Event): Promise<SignedIn> {
   if (event.context.signedIn) return event.context.signedIn as SignedIn
   await checkSignedIn(event)
@@ -20,10 +20,10 @@ async function checkSignedIn<X extends object>(event: H3Event, also = '', replac
   const session = await getUserSession(event)
   const id = session.user?.id
   if (!id) throw createError({ statusCode: 401, message: 'Please sign in.' })
-  const [user] = await selectRows<SignedIn & X & { active: boolean, revoked: boolean }>(
-    `SELECT id, "workshopId", email, name, roles, active, EXISTS (SELECT 1 FROM revoked_sessions WHERE "sessionId" = :sessionId) AS revoked${also}
+  const [user] = await selectRows<SignedIn & X & { active: boolean, revoked: boolean, sessionEpoch: number }>(
+    `SELECT id, "workshopId", email, name, roles, active, "sessionEpoch", EXISTS (SELECT 1 FROM revoked_sessions WHERE "sessionId" = :sessionId) AS revoked${also}
        FROM users WHERE id = :id`, { ...replacements, id, sessionId: session.id ?? '' })
-  if (!user || !user.active || user.revoked) {
+  if (!user || !user.active || user.revoked || user.sessionEpoch !== (session.secure?.sessionEpoch ?? 0)) {
     await clearUserSession(event)
     throw createError({ statusCode: 401, message: 'Please sign in.' })
   }

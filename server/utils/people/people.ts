@@ -26,7 +26,9 @@ export async function updatePerson(admin: SignedIn, id: number, input: UserUpdat
     if (!user) throw createError({ statusCode: 404, message: 'No such person in this workshop.' })
     const before = { name: user.name, roles: user.roles, active: user.active }
     const { password: _password, ...fields } = input
-    await user.update({ ...fields, ...(passwordHash ? { passwordHash } : {}) }, { transaction })
+    // A new password or a deactivation ends every session this person has (docs/security.md).
+    const endSessions = Boolean(passwordHash) || (before.active && input.active === false)
+    await user.update({ ...fields, ...(passwordHash ? { passwordHash } : {}), ...(endSessions ? { sessionEpoch: user.sessionEpoch + 1 } : {}) }, { transaction })
     for (const change of personChanges(before, user, Boolean(passwordHash))) {
       await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, entityType: 'user', entityId: user.id, ...change })
     }

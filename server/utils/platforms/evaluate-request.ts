@@ -4,7 +4,7 @@ import type { EvaluateRequest } from '../../../shared/schemas/evaluate'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 import { selectRows } from '../database/db'
 import { type SignedIn, requireUser, vehicleScopeSql } from '../guards/guards'
-import { settingsOf, evaluateOnServer } from './evaluation'
+import { assertKnownSettings, settingsOf, evaluateOnServer } from './evaluation'
 import { findWorkshopPlatform } from './platforms'
 
 interface CarRow { spec: VehicleSpec | null, key: string | null, name: string, motorMaxRpm: number, schema: unknown, settings: Record<string, unknown> | null }
@@ -32,5 +32,6 @@ export async function evaluateRequest(event: H3Event, input: EvaluateRequest): P
   if (!platform) {
     throw createError({ statusCode: 400, message: `Unknown drive unit "${input.platformKey}".`, data: { fields: [{ path: 'platformKey', message: 'Unknown drive unit' }] } })
   }
+  assertKnownSettings(platform, input.parameters)
   return evaluateOnServer(spec ?? input.spec!, platform, input.parameters, settings)
 }
