@@ -1,11 +1,14 @@
 import type { RoadTestCreate, RoadsideVersionInput } from '~~/shared/schemas/road-test'
 import type { AwaitingRoadTest, RoadTestChart, RoadTestListItem, RoadTestView } from '~~/shared/schemas/road-test-views'
-import type { Severity } from '~~/shared/compute/types'
+import type { PlatformLike, Severity } from '~~/shared/compute/types'
+import type { VehicleSpec } from '~~/shared/schemas/vehicle-spec'
+import type { VersionView } from '~~/shared/schemas/profile-views'
 
 export interface RoadTestBrief {
   version: { id: number, versionNo: number, state: string, authorId: number, parameters: Record<string, number> }
   profile: { id: number, name: string }
-  vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null }
+  vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null, spec: VehicleSpec }
+  platform: PlatformLike
   platformSchema: { properties?: Record<string, { title: string, unit: string, minimum: number, maximum: number, multipleOf: number }> } | null
   expected: { maxStartGradePct: number | null, creepHoldGradePct: number | null, liftOffDecelMs2: number | null, brakeRegenDecelMs2: number | null, topSpeedKph: number | null, zeroTo50S: number | null, regenGripLimitMs2: { dry: number | null, wet: number | null, snow: number | null } }
   warnings: { rule: string, severity: Severity, message: string }[]
@@ -15,20 +18,20 @@ export interface SignOffMissing { code: string, message: string, check?: string,
 
 export function useRoadTestBrief(versionId: MaybeRefOrGetter<number>) {
   // Waits for a version id (the road-test page learns it from the record it loads first).
-  return useFetch<RoadTestBrief>(() => `/api/versions/${toValue(versionId)}/road-test-brief`, { key: () => `road-test-brief-${toValue(versionId)}`, immediate: toValue(versionId) > 0 })
+  return useFetch<RoadTestBrief>(() => `/api/versions/${toValue(versionId)}/road-test-brief`, { key: () => cacheKeys.roadTestBrief(toValue(versionId)), immediate: toValue(versionId) > 0 })
 }
 
 export function useVehicleRoadTests(vehicleId: MaybeRefOrGetter<number>) {
-  return useFetch<{ items: RoadTestListItem[], total: number }>(() => `/api/vehicles/${toValue(vehicleId)}/road-tests`, { key: () => `vehicle-road-tests-${toValue(vehicleId)}` })
+  return useFetch<{ items: RoadTestListItem[], total: number }>(() => `/api/vehicles/${toValue(vehicleId)}/road-tests`, { key: () => cacheKeys.vehicleRoadTests(toValue(vehicleId)) })
 }
 
 export function useAwaitingRoadTests() {
-  return useFetch<{ items: AwaitingRoadTest[], total: number }>('/api/road-tests/awaiting', { key: 'road-tests-awaiting' })
+  return useFetch<{ items: AwaitingRoadTest[], total: number }>('/api/road-tests/awaiting', { key: cacheKeys.awaitingRoadTests })
 }
 
 export function useRoadTest(id: MaybeRefOrGetter<number>) {
-  const record = useFetch<RoadTestView>(() => `/api/road-tests/${toValue(id)}`, { key: () => `road-test-${toValue(id)}` })
-  const chart = useFetch<RoadTestChart>(() => `/api/road-tests/${toValue(id)}/chart`, { key: () => `road-test-chart-${toValue(id)}` })
+  const record = useFetch<RoadTestView>(() => `/api/road-tests/${toValue(id)}`, { key: () => cacheKeys.roadTest(toValue(id)) })
+  const chart = useFetch<RoadTestChart>(() => `/api/road-tests/${toValue(id)}/chart`, { key: () => cacheKeys.roadTestChart(toValue(id)) })
 
   async function refreshAll() {
     await Promise.all([record.refresh(), chart.refresh()])
@@ -39,8 +42,9 @@ export function useRoadTest(id: MaybeRefOrGetter<number>) {
     return result
   }
   async function recordRoadside(input: RoadsideVersionInput) {
-    const created = await $fetch<{ id: number, versionNo: number }>(`/api/road-tests/${toValue(id)}/roadside-version`, { method: 'POST', body: input })
-    await record.refresh()
+    const created = await $fetch<VersionView>(`/api/road-tests/${toValue(id)}/roadside-version`, { method: 'POST', body: input })
+    // The answer is the new version, already in review: the engineers' list and the car's profiles now hold it.
+    await Promise.all([record.refresh(), carChanged(created.vehicle!.id, cacheKeys.profiles(created.vehicle!.id), cacheKeys.reviews)])
     return created
   }
   return { record, chart, refreshAll, signOff, recordRoadside }

@@ -1,6 +1,7 @@
 import { z } from 'zod'
+import { justificationsSchema, parametersSchema } from './profile'
 
-// A road test as DESIGN §5 gives it: conditions, one verdict per mandatory check with its measured values.
+// A road test (docs/architecture.md#road-test): conditions, one verdict per mandatory check with its measured values.
 export const surfaces = ['dry', 'wet', 'snow'] as const
 export const checkVerdicts = ['pass', 'fail', 'not-tested'] as const
 export const roadTestVerdicts = ['pass', 'fail'] as const
@@ -81,8 +82,10 @@ export const roadTestCreateSchema = z.object({
 })
 export type RoadTestCreate = z.output<typeof roadTestCreateSchema>
 
+// A roadside change is sent for review at once, so it carries the submit's justifications.
 export const roadsideVersionSchema = z.object({
-  parameters: z.record(z.string(), z.number()),
-  rationale: z.string().trim().min(1, 'Say what you changed at the roadside and why').max(4000)
+  parameters: parametersSchema,
+  rationale: z.string().trim().min(1, 'Say what you changed at the roadside and why').max(4000),
+  justifications: justificationsSchema
 }).strict()
 export type RoadsideVersionInput = z.output<typeof roadsideVersionSchema>

@@ -4,7 +4,7 @@ import { z } from 'zod'
 const bodySchema = z.object({ note: z.string().trim().max(200, 'At most 200 characters').optional() }).strict()
 
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'admin', 'engineer')
+  const user = await requirePermission(event, 'fleet.recheck')
   const { note } = await readValidatedBody(event, zodValidator(bodySchema))
   const run = await useDatabase().transaction(t => startRecheck(t, user.workshopId, 'asked', note ? { note } : {}, user.id))
   setResponseStatus(event, 202)

@@ -26,7 +26,8 @@ export function zodValidator<S extends z.ZodType>(schema: S) {
   }
 }
 
-// The same answer for input that does not come through h3's validators.
+
+// The same answer for a body read another way (e.g. readSmallJsonBody): a 400 naming every field at fault.
 export function parseOr400<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
   const result = schema.safeParse(input)
   if (result.success) return result.data

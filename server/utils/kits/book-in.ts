@@ -8,7 +8,8 @@ import { zodFieldErrors } from '../guards/validate'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { assertOwner, duplicateRef, vehicleInclude, vehicleView } from '../fleet/vehicles'
-import { insertProfile, insertVersion } from '../versions/create'
+import { insertProfile } from '../versions/create'
+import { insertVersion } from '../versions/insert'
 import { findKit } from './kits'
 import { latestApprovedBaseline } from './baseline'
 
@@ -33,8 +34,8 @@ export async function bookInFromKit(user: SignedIn, input: VehicleFromKit) {
       data: { after: { ...fields, spec, platformKey: kit.platform!.key }, kitId: kit.id, kitName: kit.name, baselineVersionId: baseline.id, baselineVersionNo: baseline.versionNo }
     })
     const profile = await insertProfile(t, user, { vehicleId: v.id }, profileName)
-    await insertVersion(t, user, profile, v.id, {
-      parameters: baseline.parameters, rationale: `Started from the ${kit.name} kit's baseline, version ${baseline.versionNo}.`,
+    await insertVersion(t, user, {
+      profile, vehicleId: v.id, parameters: baseline.parameters, rationale: `Started from the ${kit.name} kit's baseline, version ${baseline.versionNo}.`,
       parent: null, origin: 'workshop', baselineVersionId: baseline.id
     })
     return v.id

@@ -8,7 +8,8 @@ import { jsonPatch } from '../../../shared/utils/json-patch'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { findWorkshopPlatform } from '../platforms/platforms'
-import { insertProfile, insertVersion } from '../versions/create'
+import { insertProfile } from '../versions/create'
+import { insertVersion } from '../versions/insert'
 import { authorInclude, reviewsInclude, versionSummary } from '../versions/views'
 import { profileBaselines } from './baseline'
 
@@ -68,7 +69,7 @@ export async function createKit(user: SignedIn, input: KitCreate): Promise<KitVi
     const profile = await insertProfile(t, user, { kitId: kit.id }, 'Baseline')
     await kit.update({ baselineProfileId: profile.id }, { transaction: t })
     const parameters = { ...defaultParameters(platform), ...input.parameters }
-    await insertVersion(t, user, profile, null, { parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
+    await insertVersion(t, user, { profile, vehicleId: null, parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
     return kit.id
   }).catch(sameName)
   return readKit(user, id)

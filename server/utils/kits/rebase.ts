@@ -45,5 +45,5 @@ export async function rebaseProfile(user: SignedIn, profileId: number, input: Re
     })
   }
   const rationale = input.rationale || `Moved onto the ${kit.name} kit's baseline version ${to.versionNo} (from version ${from.versionNo}), keeping this car's own settings.`
-  return createVersion(user, profileId, { fromVersionId: current.id, parameters, rationale }, 'workshop', to.id)
+  return createVersion(user, profileId, { fromVersionId: current.id, parameters, rationale }, to.id)
 }

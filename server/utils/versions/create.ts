@@ -4,12 +4,12 @@ import type { SignedIn } from '../guards/guards'
 import { defaultParameters } from '../../../shared/platforms'
 import { jsonPatch } from '../../../shared/utils/json-patch'
 import type { ProfileCreate, VersionCreate, VersionUpdate } from '../../../shared/schemas/profile'
-import type { VersionOrigin } from '../../../shared/schemas/version'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { versionContentHash } from './content'
+import { insertVersion } from './insert'
 import { readVersion } from './read'
-import { loadVersion, assertVersionState } from './views'
+import { loadVersion, requireTransition } from './views'
 
 // Two people naming a profile the same at the same moment: the unique index decides, the loser hears why.
 function sameNameRace(e: unknown): never {
@@ -17,32 +17,6 @@ function sameNameRace(e: unknown): never {
     throw createError({ statusCode: 409, message: 'This car already has a profile with that name.', data: { fields: [{ path: 'name', message: 'Already used on this car' }] } })
   }
   throw e
-}
-
-// baselineVersionId: the kit baseline version the settings were built from (inherited from the parent unless given).
-export interface NewVersion { parameters: Record<string, number>, rationale: string, parent: ProfileVersion | null, origin: VersionOrigin, baselineVersionId?: number | null }
-
-// The next number is max + 1, read after the profile row is locked, so concurrent creations queue and
-// never share or skip a number (the database trigger checks the same).
-export async function insertVersion(t: Transaction, user: SignedIn, profile: Profile, vehicleId: number | null, input: NewVersion) {
-  await Profile.findByPk(profile.id, { transaction: t, lock: t.LOCK.UPDATE })
-  const max = await ProfileVersion.max<number | null, ProfileVersion>('versionNo', { where: { profileId: profile.id }, transaction: t })
-  const content = {
-    profileId: profile.id, versionNo: (max ?? 0) + 1, parentVersionId: input.parent?.id ?? null,
-    parameters: input.parameters, rationale: input.rationale, authorId: user.id, origin: input.origin
-  }
-  const contentHash = versionContentHash(content)
-  const baselineVersionId = input.baselineVersionId === undefined ? input.parent?.baselineVersionId ?? null : input.baselineVersionId
-  const version = await ProfileVersion.create({ ...content, workshopId: user.workshopId, contentHash, baselineVersionId }, { transaction: t })
-  await appendAuditEvent(t, {
-    workshopId: user.workshopId, vehicleId, actorId: user.id, action: 'version.created', entityType: 'version', entityId: version.id,
-    data: {
-      profileId: profile.id, profileName: profile.name, versionNo: version.versionNo, parentVersionId: content.parentVersionId,
-      parentVersionNo: input.parent?.versionNo ?? null, origin: input.origin, contentHash, parameters: input.parameters, rationale: input.rationale, ...(baselineVersionId ? { baselineVersionId } : {}),
-      patchFromParent: input.parent ? jsonPatch(input.parent.parameters, input.parameters) : null
-    }
-  })
-  return version
 }
 
 // A new profile of a car or of a kit (its baseline), with its event in the history.
@@ -59,15 +33,15 @@ export async function createProfile(user: SignedIn, vehicle: Vehicle, input: Pro
     const clash = await Profile.findOne({ where: { vehicleId: vehicle.id, name: input.name }, transaction: t })
     if (clash) throw createError({ statusCode: 409, message: `This car already has a profile called "${input.name}".`, data: { fields: [{ path: 'name', message: 'Already used on this car' }] } })
     const profile = await insertProfile(t, user, { vehicleId: vehicle.id }, input.name)
-    const version = await insertVersion(t, user, profile, vehicle.id, { parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
+    const version = await insertVersion(t, user, { profile, vehicleId: vehicle.id, parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
     return version.id
   }).catch(sameNameRace)
   return readVersion(user, versionId)
 }
 
 // A new draft from any earlier version of the profile (by default the one on the car, else the latest).
-// `baselineVersionId` is given only when rebasing onto a newer kit baseline.
-export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate, origin: VersionOrigin = 'workshop', baselineVersionId?: number) {
+// `baselineVersionId` is given only when moving onto a newer kit baseline (docs/kits.md).
+export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate, baselineVersionId?: number) {
   const profile = await Profile.findOne({ where: { id: profileId, workshopId: user.workshopId } })
   if (!profile) throw createError({ statusCode: 404, message: 'No such profile in this workshop.' })
   const versionId = await useDatabase().transaction(async (t) => {
@@ -78,7 +52,7 @@ export async function createVersion(user: SignedIn, profileId: number, input: Ve
       throw createError({ statusCode: 400, message: 'The version to start from is not a version of this profile.', data: { fields: [{ path: 'fromVersionId', message: 'Not a version of this profile' }] } })
     }
     const parameters = input.parameters ?? parent?.parameters ?? {}
-    const version = await insertVersion(t, user, profile, profile.vehicleId, { parameters, rationale: input.rationale, parent, origin, baselineVersionId })
+    const version = await insertVersion(t, user, { profile, vehicleId: profile.vehicleId, parameters, rationale: input.rationale, parent, origin: 'workshop', baselineVersionId })
     return version.id
   })
   return readVersion(user, versionId)
@@ -88,8 +62,7 @@ export async function createVersion(user: SignedIn, profileId: number, input: Ve
 export async function updateDraft(user: SignedIn, id: number, input: VersionUpdate) {
   await useDatabase().transaction(async (t) => {
     const { version: v, subject } = await loadVersion(user, id, t)
-    if (v.authorId !== user.id) throw createError({ statusCode: 403, message: 'Only the author of a draft can change it; start a new version from it instead.' })
-    assertVersionState(v, ['draft'], 'changed')
+    requireTransition(v, 'edit', user)
     if (v.lockVersion !== input.lockVersion) {
       throw createError({
         statusCode: 409,
