@@ -20,10 +20,3 @@ export function csvLine(cells: string[]): string {
   return `${cells.map(csvCell).join(',')}\r\n`
 }
 
-// Every cell quoted, for exports a person opens in a spreadsheet; the same formula neutralising as csvCell.
-export function csvQuotedLine(cells: string[]): string {
-  return `${cells.map((c) => {
-    const cell = csvCell(c)
-    return cell.startsWith('"') ? cell : `"${cell}"`
-  }).join(',')}\r\n`
-}
