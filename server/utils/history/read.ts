@@ -1,7 +1,9 @@
 import { QueryTypes } from 'sequelize'
 import type { HistoryEntry, HistoryPage, HistoryQuery } from '../../../shared/schemas/history'
-import { changeRows, copyState, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
+import { changeRows, copyState, creationRows, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
 import { useDatabase } from '../database/db'
+import { eventNames } from './names'
+import { parentSettings } from './parents'
 
 export interface HistoryScope { workshopId: number, vehicleId?: number }
 
@@ -89,12 +91,13 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
 }
 
 async function toEntries(workshopId: number, rows: EventRow[], complete: boolean): Promise<HistoryEntry[]> {
-  const folds = await foldedStates(workshopId, rows, complete)
-  return rows.map(r => ({
+  const [folds, names, parents] = await Promise.all([foldedStates(workshopId, rows, complete), eventNames(workshopId, rows), parentSettings(workshopId, rows)])
+  return rows.map((r, i) => ({
     id: String(r.id), createdAt: new Date(r.createdAt).toISOString(), action: r.action, entityType: r.entityType, entityId: r.entityId,
     vehicle: r.vehicleId ? { id: r.vehicleId, stockRef: r.stockRef ?? '' } : null,
     actor: r.actorId ? { id: r.actorId, name: r.actorName ?? 'someone no longer listed' } : null,
-    changes: changeRows(r.data, folds.get(String(r.id))), details: eventDetails(r.data), hash: r.hash, prevHash: r.prevHash
+    changes: r.action === 'version.created' ? creationRows(r.data, parents.get(String(r.id))) : changeRows(r.data, folds.get(String(r.id))),
+    details: eventDetails(r.data), names: names[i]!, hash: r.hash, prevHash: r.prevHash
   }))
 }
 

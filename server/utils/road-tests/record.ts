@@ -49,7 +49,7 @@ export async function recordRoadTest(user: SignedIn, versionId: number, input: R
     }
     await appendAuditEvent(transaction, {
       workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'road-test.recorded', entityType: 'road-test', entityId: rt.id,
-      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict })) }
+      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict, values: c.values })) }
     })
     return rt.id
   })
