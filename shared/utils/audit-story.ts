@@ -89,6 +89,14 @@ function sentenceOf(e: HistoryEntry, d: Data): string {
 const told = new Set(['versionNo', 'profileName', 'profile', 'parentVersionNo', 'vehicleStatus', 'unresolvedSnags', 'dangerCount', 'from', 'to', 'because',
   'passwordChanged', 'name', 'after', 'verdict', 'checks', 'parameters', 'patchFromParent', 'filename', 'matches', 'stockRef', 'make', 'model', 'year', 'signed'])
 
+// "Lift-off regen: 25 % signed off, 50 % found"
+function differenceText(x: Data): string {
+  const label = knownChangeLabel('version', `/parameters/${x.parameter}`) ?? keyLabel(String(x.parameter))
+  const [name, unit] = label.includes(', ') ? [label.slice(0, label.lastIndexOf(', ')), label.slice(label.lastIndexOf(', ') + 2)] : [label, '']
+  const value = (y: unknown) => (typeof y === 'number' && unit ? `${numberText(y)} ${unit}` : valueText(y ?? null))
+  return `${name}: ${value(x.expected)} signed off, ${value(x.found)} found`
+}
+
 function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
   const facts: StoryRow[] = []
   const add = (label: string, value: string) => facts.push({ label, value })
@@ -102,7 +110,7 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
     } else if (k === 'justifications') {
       for (const [rule, text] of Object.entries(obj(v))) add(`Why it is safe: ${ruleTitles[rule as keyof typeof ruleTitles]?.title ?? wordsOf(rule)}`, valueText(text))
     } else if (k === 'differences' && Array.isArray(v)) {
-      add('Differences', v.map((x: Data) => `${knownChangeLabel('version', `/parameters/${x.parameter}`) ?? wordsOf(String(x.parameter))}: ${valueText(x.expected ?? null)} signed off, ${valueText(x.found ?? null)} found`).join('; ') || 'none')
+      add('Differences', v.map(differenceText).join('; ') || 'none')
     } else if (k === 'summary') {
       summaryRows(obj(v)).forEach(r => add(r.label, r.value))
     } else if (k === 'bytes' && num(v) !== undefined) {
@@ -124,8 +132,8 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
 function measuredText(key: CheckKey, name: string, v: unknown): string {
   const field = checkGuides.find(g => g.key === key)?.fields.find(f => f.name === name)
   if (!field || typeof v !== 'number') return `${keyLabel(name).replace(/, .*$/, '')} ${valueText(v, name)}`
-  const decimals = field.step < 0.1 ? 2 : field.step < 1 ? 1 : 0
-  return `${field.label.replace(/, if measured$/, '')} ${numberText(v, decimals)} ${field.unit}`
+  const text = field.unit === 'm/s²' ? numberText(v, 2) : v.toLocaleString('en-GB', { maximumFractionDigits: field.step < 1 ? 1 : 0 })
+  return `${field.label.replace(/, if measured$/, '')} ${text} ${field.unit}`
 }
 
 function checksOf(d: Data): StoryCheck[] {

@@ -8,16 +8,19 @@ const valid = (x: DateInput) => {
   return Number.isNaN(d.getTime()) ? null : d
 }
 
+// `timeZone` for what is printed away from the screen (the handover sheet writes UTC and says so).
+export interface DateOptions { locale?: string, timeZone?: string }
+
 // "2 Dec 2026"
-export function formatDate(x: DateInput | null | undefined, locale = DEFAULT_LOCALE): string {
+export function formatDate(x: DateInput | null | undefined, o: DateOptions = {}): string {
   const d = x === null || x === undefined ? null : valid(x)
-  return d ? d.toLocaleDateString(locale, { day: 'numeric', month: 'short', year: 'numeric' }) : '—'
+  return d ? d.toLocaleDateString(o.locale ?? DEFAULT_LOCALE, { day: 'numeric', month: 'short', year: 'numeric', timeZone: o.timeZone }) : '—'
 }
 
 // "2 Dec 2026, 14:05"
-export function formatDateTime(x: DateInput | null | undefined, locale = DEFAULT_LOCALE): string {
+export function formatDateTime(x: DateInput | null | undefined, o: DateOptions = {}): string {
   const d = x === null || x === undefined ? null : valid(x)
-  return d ? `${formatDate(d, locale)}, ${d.toLocaleTimeString(locale, { hour: '2-digit', minute: '2-digit' })}` : '—'
+  return d ? `${formatDate(d, o)}, ${d.toLocaleTimeString(o.locale ?? DEFAULT_LOCALE, { hour: '2-digit', minute: '2-digit', timeZone: o.timeZone })}` : '—'
 }
 
 // An ISO moment or day as the history may hold one in its values.

@@ -85,6 +85,6 @@ describe('the history in the workshop\'s words', () => {
       { label: 'Assigned to (person no.)', before: null, after: 'Ada Penhallow', removed: false }
     ])
     const diff = eventStory(entryOf('readback.differs', samples['readback.differs']!))
-    expect(diff.facts.find(f => f.label === 'Differences')!.value).toBe('Power cap, kW: 85 signed off, 92.3 found; unknown setting: none signed off, 4 found')
+    expect(diff.facts.find(f => f.label === 'Differences')!.value).toBe('Power cap: 85 kW signed off, 92.3 kW found; Unknown setting: none signed off, 4 found')
   })
 })
