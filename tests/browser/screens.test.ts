@@ -74,4 +74,24 @@ describe('every main page fits the screen, as each of its people sees it', async
       await context.close()
     }
   })
+
+  it('says what is wrong with a road-test link, and why a photo is refused', async () => {
+    const { context, page } = await launch(390)
+    try {
+      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tester@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      for (const [path, words] of [['/road-tests/new', 'does not say which version'], ['/road-tests/new?versionId=abc', 'does not exist'], ['/road-tests/new?versionId=999999', 'Back to the bench']] as const) {
+        await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
+        await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Nothing to road-test here' }).count(), path).toBe(1)
+        expect(await page.getByRole('alert').textContent()).toContain(words)
+      }
+      await page.goto(`${baseUrl}/road-tests/new?version=${created.body.id}`, { waitUntil: 'networkidle' })
+      await expect.poll(() => page.getByText(/not approved; the record cannot be saved/).count()).toBe(1)
+      await page.getByRole('button', { name: 'Start the checks' }).click()
+      await page.locator('input[type=file]').setInputFiles({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') })
+      await expect.poll(() => page.getByRole('alert').filter({ hasText: 'notes.txt was not added: only JPEG, PNG or WebP photos' }).count()).toBe(1)
+      await shot(page, 'screens-02-photo-refused')
+    } finally {
+      await context.close()
+    }
+  })
 })

@@ -9,8 +9,9 @@ import { megabytes, receiveUpload, tooLarge, UploadRefused } from './uploads'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { newObjectKey, putObject, deleteObjects } from './object-store'
+import { PHOTO_MAX_MB } from '../../../shared/schemas/photo'
 
-export const PHOTO_MAX_BYTES = megabytes(15)
+export const PHOTO_MAX_BYTES = megabytes(PHOTO_MAX_MB)
 export const THUMBNAIL_PX = 320
 const FORMATS: Record<string, string> = { 'image/jpeg': 'jpeg', 'image/png': 'png', 'image/webp': 'webp' }
 
