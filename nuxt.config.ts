@@ -40,7 +40,7 @@ export default defineNuxtConfig({
     // Sequelize loads its dialect by name at run time; pdfkit reads its font data and sharp loads its
     // native binding from their own folders: keep these as real node modules.
     externals: { external: ['sequelize', 'pg', 'pg-hstore', 'pdfkit', 'sharp'] },
-    // IBM Plex Sans for the handover PDF, as WOFF (pdfkit cannot read WOFF2; PACKAGES.md).
+    // IBM Plex Sans for the handover PDF, as WOFF (pdfkit cannot read WOFF2).
     serverAssets: [{ baseName: 'fonts', dir: fileURLToPath(new URL('./node_modules/@fontsource/ibm-plex-sans/files', import.meta.url)), pattern: 'ibm-plex-sans-latin*-{400,600}-normal.woff' }]
   },
   security: {

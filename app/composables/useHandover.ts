@@ -1,5 +1,5 @@
 import type { HandoverSheet } from '~~/shared/schemas/handover'
 
 export function useHandover(vehicleId: MaybeRefOrGetter<number>) {
-  return useFetch<HandoverSheet>(() => `/api/vehicles/${toValue(vehicleId)}/handover`, { key: () => `handover-${toValue(vehicleId)}` })
+  return useFetch<HandoverSheet>(() => `/api/vehicles/${toValue(vehicleId)}/handover`, { key: () => cacheKeys.handover(toValue(vehicleId)) })
 }

@@ -5,22 +5,19 @@ export interface ReadbackList { items: ReadbackView[], onCar: OnCarProfile[], dr
 export interface DriftedCar { id: number, stockRef: string, make: string, model: string, driftedAt: string, differences: ReadbackView['differences'] }
 
 export function useReadbacks(vehicleId: MaybeRefOrGetter<number>) {
-  const list = useFetch<ReadbackList>(() => `/api/vehicles/${toValue(vehicleId)}/readbacks`, { key: () => `readbacks-${toValue(vehicleId)}` })
-  const historyRevision = useHistoryRevision(toValue(vehicleId))
+  const list = useFetch<ReadbackList>(() => `/api/vehicles/${toValue(vehicleId)}/readbacks`, { key: () => cacheKeys.readbacks(toValue(vehicleId)) })
   async function record(body: ReadbackBody) {
     const saved = await $fetch<ReadbackView>(`/api/vehicles/${toValue(vehicleId)}/readback`, { method: 'POST', body })
-    await list.refresh()
-    await refreshNuxtData([`vehicle-${toValue(vehicleId)}`, 'drifted-cars'])
-    historyRevision.value++
+    await Promise.all([list.refresh(), carChanged(toValue(vehicleId), cacheKeys.driftedCars)])
     return saved
   }
   return { ...list, record }
 }
 
 export function useDriftedCars() {
-  return useFetch<{ items: DriftedCar[], total: number }>('/api/drift', { key: 'drifted-cars' })
+  return useFetch<{ items: DriftedCar[], total: number }>('/api/drift', { key: cacheKeys.driftedCars })
 }
 
 export function useClientCar(vehicleId: MaybeRefOrGetter<number>) {
-  return useFetch<ClientCarView>(() => `/api/vehicles/${toValue(vehicleId)}/client-view`, { key: () => `client-car-${toValue(vehicleId)}` })
+  return useFetch<ClientCarView>(() => `/api/vehicles/${toValue(vehicleId)}/client-view`, { key: () => cacheKeys.clientCar(toValue(vehicleId)) })
 }

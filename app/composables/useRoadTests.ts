@@ -15,20 +15,20 @@ export interface SignOffMissing { code: string, message: string, check?: string,
 
 export function useRoadTestBrief(versionId: MaybeRefOrGetter<number>) {
   // Waits for a version id (the road-test page learns it from the record it loads first).
-  return useFetch<RoadTestBrief>(() => `/api/versions/${toValue(versionId)}/road-test-brief`, { key: () => `road-test-brief-${toValue(versionId)}`, immediate: toValue(versionId) > 0 })
+  return useFetch<RoadTestBrief>(() => `/api/versions/${toValue(versionId)}/road-test-brief`, { key: () => cacheKeys.roadTestBrief(toValue(versionId)), immediate: toValue(versionId) > 0 })
 }
 
 export function useVehicleRoadTests(vehicleId: MaybeRefOrGetter<number>) {
-  return useFetch<{ items: RoadTestListItem[], total: number }>(() => `/api/vehicles/${toValue(vehicleId)}/road-tests`, { key: () => `vehicle-road-tests-${toValue(vehicleId)}` })
+  return useFetch<{ items: RoadTestListItem[], total: number }>(() => `/api/vehicles/${toValue(vehicleId)}/road-tests`, { key: () => cacheKeys.vehicleRoadTests(toValue(vehicleId)) })
 }
 
 export function useAwaitingRoadTests() {
-  return useFetch<{ items: AwaitingRoadTest[], total: number }>('/api/road-tests/awaiting', { key: 'road-tests-awaiting' })
+  return useFetch<{ items: AwaitingRoadTest[], total: number }>('/api/road-tests/awaiting', { key: cacheKeys.awaitingRoadTests })
 }
 
 export function useRoadTest(id: MaybeRefOrGetter<number>) {
-  const record = useFetch<RoadTestView>(() => `/api/road-tests/${toValue(id)}`, { key: () => `road-test-${toValue(id)}` })
-  const chart = useFetch<RoadTestChart>(() => `/api/road-tests/${toValue(id)}/chart`, { key: () => `road-test-chart-${toValue(id)}` })
+  const record = useFetch<RoadTestView>(() => `/api/road-tests/${toValue(id)}`, { key: () => cacheKeys.roadTest(toValue(id)) })
+  const chart = useFetch<RoadTestChart>(() => `/api/road-tests/${toValue(id)}/chart`, { key: () => cacheKeys.roadTestChart(toValue(id)) })
 
   async function refreshAll() {
     await Promise.all([record.refresh(), chart.refresh()])

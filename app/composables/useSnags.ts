@@ -10,22 +10,26 @@ export function useSnagList(vehicleId: MaybeRefOrGetter<number | null>, filters:
   const list = useFetch<{ items: SnagView[], total: number }>(url, { key: () => `snags-${toValue(vehicleId) ?? 'all'}-${JSON.stringify(query.value)}`, query })
 
   async function add(carId: number, input: Partial<SnagCreate>) {
-    const created = await $fetch<SnagView>(`/api/vehicles/${carId}/snags`, { method: 'POST', body: input })
+    const created = await raiseSnag(carId, input)
     await list.refresh()
     return created
   }
   async function change(id: number, changes: SnagUpdate) {
     const saved = await $fetch<SnagView>(`/api/snags/${id}`, { method: 'PATCH', body: changes })
-    await list.refresh()
+    // The answer is the snag as saved: it replaces the row, and the car's history and page read again.
+    if (list.data.value) list.data.value = { ...list.data.value, items: list.data.value.items.map(s => s.id === id ? saved : s) }
+    await carChanged(saved.vehicleId, cacheKeys.vehicleRoadTests(saved.vehicleId))
     return saved
   }
   return { ...list, add, change }
 }
 
 export function useSnagAssignees() {
-  return useFetch<{ items: { id: number, name: string }[] }>('/api/snags/assignees', { key: 'snag-assignees' })
+  return useFetch<{ items: { id: number, name: string }[] }>('/api/snags/assignees', { key: cacheKeys.snagAssignees })
 }
 
 export async function raiseSnag(carId: number, input: Partial<SnagCreate>) {
-  return $fetch<SnagView>(`/api/vehicles/${carId}/snags`, { method: 'POST', body: input })
+  const created = await $fetch<SnagView>(`/api/vehicles/${carId}/snags`, { method: 'POST', body: input })
+  await carChanged(carId)
+  return created
 }

@@ -8,10 +8,11 @@ export function useVehicleList(state: Ref<VehicleListState>) {
 }
 
 export function useVehicle(id: MaybeRefOrGetter<number>) {
-  const data = useFetch<VehicleView>(() => `/api/vehicles/${toValue(id)}`, { key: () => `vehicle-${toValue(id)}` })
+  const data = useFetch<VehicleView>(() => `/api/vehicles/${toValue(id)}`, { key: () => cacheKeys.vehicle(toValue(id)) })
   async function save(changes: VehicleUpdate) {
     const saved = await $fetch<VehicleView>(`/api/vehicles/${toValue(id)}`, { method: 'PATCH', body: changes })
-    await data.refresh()
+    data.data.value = saved
+    useHistoryRevision(saved.id).value++
     return saved
   }
   return { ...data, save }

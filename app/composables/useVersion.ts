@@ -4,17 +4,17 @@ export interface DraftChanges { lockVersion: number, parameters?: Record<string,
 
 // One version (the tune sheet) and what its author and reviewers can do with it.
 export function useVersion(id: MaybeRefOrGetter<number>) {
-  const data = useFetch<VersionView>(() => `/api/versions/${toValue(id)}`, { key: () => `version-${toValue(id)}` })
-  const act = async (path: string, body: Record<string, unknown> = {}) => {
-    const v = await $fetch<VersionView>(`/api/versions/${toValue(id)}/${path}`, { method: 'POST', body })
-    await data.refresh()
+  const data = useFetch<VersionView>(() => `/api/versions/${toValue(id)}`, { key: () => cacheKeys.version(toValue(id)) })
+  // A write answers the version as it now is: shown as it is, and the lists that hold it read again.
+  async function took(v: VersionView) {
+    data.data.value = v
+    await carChanged(v.vehicle.id, cacheKeys.profiles(v.vehicle.id), cacheKeys.reviews, cacheKeys.drafts, cacheKeys.awaitingRoadTests)
     return v
   }
+  const act = async (path: string, body: Record<string, unknown> = {}) => took(await $fetch<VersionView>(`/api/versions/${toValue(id)}/${path}`, { method: 'POST', body }))
 
   async function save(changes: DraftChanges) {
-    const v = await $fetch<VersionView>(`/api/versions/${toValue(id)}`, { method: 'PATCH', body: changes })
-    await data.refresh()
-    return v
+    return took(await $fetch<VersionView>(`/api/versions/${toValue(id)}`, { method: 'PATCH', body: changes }))
   }
 
   // A new draft that starts from this version (any version can be the starting point).
@@ -34,5 +34,5 @@ export function useVersion(id: MaybeRefOrGetter<number>) {
 }
 
 export function useVersionDiff(a: MaybeRefOrGetter<number>, b: MaybeRefOrGetter<number>) {
-  return useFetch<VersionDiff>(() => `/api/versions/${toValue(a)}/diff/${toValue(b)}`, { key: () => `diff-${toValue(a)}-${toValue(b)}` })
+  return useFetch<VersionDiff>(() => `/api/versions/${toValue(a)}/diff/${toValue(b)}`, { key: () => cacheKeys.diff(toValue(a), toValue(b)) })
 }

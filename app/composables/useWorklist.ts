@@ -2,9 +2,9 @@ import type { DraftWorkItem, ReviewWorkItem } from '~~/shared/schemas/profile-vi
 
 // The Bench's lists: what awaits an engineer's review, and a tuner's drafts and sent-back versions.
 export function useReviewWorklist() {
-  return useFetch<{ items: ReviewWorkItem[], total: number }>('/api/worklist/reviews', { key: 'worklist-reviews' })
+  return useFetch<{ items: ReviewWorkItem[], total: number }>('/api/worklist/reviews', { key: cacheKeys.reviews })
 }
 
 export function useDraftWorklist() {
-  return useFetch<{ items: DraftWorkItem[], total: number }>('/api/worklist/drafts', { key: 'worklist-drafts' })
+  return useFetch<{ items: DraftWorkItem[], total: number }>('/api/worklist/drafts', { key: cacheKeys.drafts })
 }

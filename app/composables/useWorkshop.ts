@@ -4,10 +4,10 @@ export interface WorkshopView { id: number, name: string, settings: WorkshopSett
 
 // The signed-in person's workshop: its rule thresholds and how it likes numbers shown.
 export function useWorkshop() {
-  const data = useFetch<WorkshopView>('/api/workshop', { key: 'workshop' })
+  const data = useFetch<WorkshopView>('/api/workshop', { key: cacheKeys.workshop })
   async function changeSettings(change: Partial<WorkshopSettingsInput>) {
     const saved = await $fetch<WorkshopView>('/api/workshop/settings', { method: 'PATCH', body: change })
-    await data.refresh()
+    data.data.value = saved
     return saved
   }
   return { ...data, changeSettings }

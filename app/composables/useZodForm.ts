@@ -1,6 +1,5 @@
 import type { z } from 'zod'
 
-export interface FieldIssue { path: string, message: string }
 
 // Validates a form with the same zod schema as the route that receives it, and keeps the
 // messages by field so each one shows beside the field that holds the wrong value.
@@ -23,10 +22,10 @@ export function useZodForm<S extends z.ZodType>(schema: S) {
 
   // Shows a server's 400/409 answer ({data: {fields}}) the same way.
   function fromServer(error: unknown) {
-    const e = error as { data?: { message?: string, data?: { fields?: FieldIssue[] } } }
+    const e = apiError(error)
     errors.value = {}
-    for (const f of e.data?.data?.fields ?? []) errors.value[f.path] ??= f.message
-    formMessage.value = e.data?.message ?? 'The change could not be saved.'
+    for (const f of e.data?.fields ?? []) errors.value[f.path] ??= f.message
+    formMessage.value = e.message ?? 'The change could not be saved.'
   }
 
   return { errors, formMessage, validate, fromServer }

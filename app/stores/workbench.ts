@@ -1,14 +1,15 @@
 import { defineStore } from 'pinia'
 import type { Role } from '~~/shared/schemas/roles'
 import { isStaff } from '~~/shared/schemas/roles'
+import { can as roleCan, type Permission } from '~~/shared/utils/permissions'
 
-// The signed-in person's bench: who they are, their workshop, and how they like numbers shown.
+// The signed-in person's bench: who they are and what their roles let them do.
 export const useWorkbenchStore = defineStore('workbench', () => {
-  const { user, loggedIn, clear, fetch: refreshSession } = useUserSession()
-  const speedUnit = ref<'km/h' | 'mph'>('km/h')
+  const { user, clear, fetch: refreshSession } = useUserSession()
 
   const roles = computed<Role[]>(() => (user.value?.roles ?? []) as Role[])
   const has = (...wanted: Role[]) => roles.value.some(r => wanted.includes(r))
+  const can = (permission: Permission) => roleCan(roles.value, permission)
   const staff = computed(() => isStaff(roles.value))
 
   async function signIn(email: string, password: string) {
@@ -22,5 +23,5 @@ export const useWorkbenchStore = defineStore('workbench', () => {
     await navigateTo('/login')
   }
 
-  return { user, loggedIn, roles, has, staff, speedUnit, signIn, signOut }
+  return { user, roles, has, can, staff, signIn, signOut }
 })

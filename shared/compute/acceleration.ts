@@ -1,4 +1,4 @@
-// Full-power acceleration from rest and top speed on the level (DESIGN §4, acceleration).
+// Full-power acceleration from rest and top speed on the level (docs/computation.md#acceleration).
 import { envelopeForceUncutN, motorRpmSpeedMs, type DriveEnvelope } from './envelope'
 import { timesToSpeeds, DEFAULT_MAX_TIME_S, type AccelerationLaw } from './integrate'
 import { roadLoadN, type RoadLoadInputs } from './roadload'

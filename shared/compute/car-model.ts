@@ -9,7 +9,7 @@ import { mmToM } from './units'
 
 export const testMassKg = (spec: VehicleSpec): number => spec.kerbMassKg + spec.payloadKg
 
-// s_r = 1 − frontAxleLoadPct/100 (DESIGN §4, axles).
+// s_r = 1 − frontAxleLoadPct/100 (docs/computation.md#axles).
 export const rearShare = (spec: VehicleSpec): number => 1 - spec.frontAxleLoadPct / 100
 
 export function chassisOf(spec: VehicleSpec): Chassis {

@@ -1,4 +1,4 @@
-// Pack currents and charging (DESIGN §4, currents).
+// Pack currents and charging (docs/computation.md#currents).
 
 // Battery current at the power cap I = P/(η·V): the pack supplies the drivetrain's losses too.
 export function peakDischargeCurrentA(powerCapKw: number, drivetrainEfficiency: number, packVoltageV: number): number {

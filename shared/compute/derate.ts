@@ -1,4 +1,4 @@
-// Thermal derating: torque available as a sensor warms up (DESIGN §4, derate).
+// Thermal derating: torque available as a sensor warms up (docs/computation.md#derate).
 
 export type DerateSensor = 'motor' | 'inverter' | 'battery'
 export const DERATE_SENSORS: readonly DerateSensor[] = ['motor', 'inverter', 'battery']

@@ -1,4 +1,4 @@
-// The drive unit's torque envelope and the force it puts on the road (DESIGN §4, drive envelope).
+// The drive unit's torque envelope and the force it puts on the road (docs/computation.md#drive-envelope).
 import { kphToMs, rpmToRadPerSec } from './units'
 
 export interface DriveEnvelope {

@@ -1,4 +1,4 @@
-// "What it does to this car": every figure of DESIGN §4, null with a reason where it cannot be had.
+// "What it does to this car": every figure of docs/computation.md#figures, null with a reason where it cannot be had.
 import type { VehicleSpec } from '../schemas/vehicle-spec'
 import { analyseAcceleration } from './acceleration'
 import { carModel, chassisOf, regenDrive, testMassKg } from './car-model'

@@ -1,4 +1,4 @@
-// Steepest gradient the car can start on, or creep up, from rest (DESIGN §4, hill start).
+// Steepest gradient the car can start on, or creep up, from rest (docs/computation.md#hill-start).
 import type { Chassis, DrivenAxle } from './traction'
 import { STANDARD_GRAVITY } from './units'
 

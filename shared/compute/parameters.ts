@@ -1,4 +1,4 @@
-// The controller settings a profile version holds (DESIGN §3); each platform's schema gives their ranges.
+// The controller settings a profile version holds (docs/computation.md#parameters); each platform's schema gives their ranges.
 
 export const PARAMETER_NAMES = [
   'powerCapKw',

@@ -1,4 +1,4 @@
-// Regenerative braking: how hard it pulls and how much the driven axle can take (DESIGN §4, regen).
+// Regenerative braking: how hard it pulls and how much the driven axle can take (docs/computation.md#regen).
 import type { DrivenAxle } from './traction'
 import { STANDARD_GRAVITY } from './units'
 

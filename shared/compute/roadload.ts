@@ -1,4 +1,4 @@
-// Forces that resist motion on level road (DESIGN §4, road load).
+// Forces that resist motion on level road (docs/computation.md#road-load).
 import { AIR_DENSITY_SEA_LEVEL, STANDARD_GRAVITY } from './units'
 
 export interface RoadLoadInputs {

@@ -1,4 +1,4 @@
-// How much drive the driven axle can put down, with load transfer (DESIGN §4, traction limit).
+// How much drive the driven axle can put down, with load transfer (docs/computation.md#traction).
 import { STANDARD_GRAVITY } from './units'
 
 export type DrivenAxle = 'front' | 'rear' | 'all'

@@ -1,6 +1,6 @@
 import type { Figures } from '../compute/types'
 
-// The figures of DESIGN §4 as the compare screen lists them; axle and surface pairs are one row each.
+// The figures (docs/computation.md#figures) as the compare screen lists them; axle and surface pairs are one row each.
 export const FIGURE_ROWS: { name: string, label: string, unit: string, read: (f: Figures) => number | string | null }[] = [
   { name: 'zeroTo50S', label: '0–50 km/h', unit: 's', read: f => f.zeroTo50S },
   { name: 'zeroTo100S', label: '0–100 km/h', unit: 's', read: f => f.zeroTo100S },

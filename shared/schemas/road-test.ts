@@ -1,6 +1,6 @@
 import { z } from 'zod'
 
-// A road test as DESIGN §5 gives it: conditions, one verdict per mandatory check with its measured values.
+// A road test (docs/architecture.md#road-test): conditions, one verdict per mandatory check with its measured values.
 export const surfaces = ['dry', 'wet', 'snow'] as const
 export const checkVerdicts = ['pass', 'fail', 'not-tested'] as const
 export const roadTestVerdicts = ['pass', 'fail'] as const

@@ -1,6 +1,6 @@
 import { z } from 'zod'
 
-// The snag list (DESIGN §2): what a road test or the workshop found on a car, in three kinds.
+// The snag list (docs/architecture.md#snags): what a road test or the workshop found on a car, in three kinds.
 export const snagKinds = ['conversion', 'remedial', 'enhancement'] as const
 export const snagPriorities = ['low', 'normal', 'high', 'urgent'] as const
 export const snagStatuses = ['open', 'in-hand', 'done', 'declined'] as const

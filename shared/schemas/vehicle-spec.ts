@@ -9,7 +9,7 @@ const positive = (max: number) => z.number({ error: 'A number is needed' }).posi
 
 export const drivenAxles = ['front', 'rear', 'all'] as const
 
-// The chassis and drivetrain facts that decide what is safe for this car (DESIGN §3).
+// The chassis and drivetrain facts that decide what is safe for this car (docs/computation.md#car-facts).
 export const vehicleSpecSchema = z.object({
   kerbMassKg: positive(4000),
   payloadKg: z.number().min(0, 'Cannot be negative').max(1500).default(150),

@@ -1,4 +1,4 @@
-// The controller's log format (DESIGN §5): one row per sample, these columns, a header line first.
+// The controller's log format (docs/computation.md#log-format): one row per sample, these columns, a header line first.
 export const TELEMETRY_COLUMNS = [
   'time_s', 'speed_kph', 'motor_torque_nm', 'motor_rpm', 'pedal_pct', 'brake',
   'motor_c', 'inverter_c', 'battery_c', 'battery_v', 'battery_a'

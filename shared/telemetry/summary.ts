@@ -1,4 +1,4 @@
-// The summary of a road-test log (DESIGN §5), built one sample at a time so a 50 MB file is never held whole.
+// The summary of a road-test log (docs/computation.md#telemetry-summary), built one sample at a time so a 50 MB file is never held whole.
 import type { TelemetrySample } from './columns'
 
 export interface TelemetrySummary {

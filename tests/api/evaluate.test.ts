@@ -26,7 +26,7 @@ describe('POST /api/evaluate', async () => {
     expect(res.body.valid).toBe(true)
     expect(res.body.errors).toEqual([])
     const f = res.body.figures
-    expect(f.testMassKg).toBe(905 + 150) // the seeded kerb mass plus the default 150 kg payload (DESIGN §3)
+    expect(f.testMassKg).toBe(905 + 150) // the seeded kerb mass plus the default 150 kg payload (docs/computation.md#car-facts)
     // Rear-axle-only braking limit a = μ·g·s_r/(1 + μ·h/L), Gillespie ch. 2 load transfer (REFERENCES.md)
     const mu = settings.friction.wet
     const expected = mu * STANDARD_GRAVITY * 0.53 / (1 + mu * 0.47 / 2.235)

@@ -6,7 +6,7 @@ import { newCar as newReviewCar, newProfile as newDraft } from './version-fixtur
 import { approvedVersion, multipart, newCar, newProfile, recordRoadTest, sha256, upload } from './road-test-fixtures'
 import { syntheticDrive, telemetryCsv } from '../../shared/telemetry/synthetic'
 
-// maildev's REST API (PACKAGES.md): GET /api/email lists what the SMTP sink received.
+// maildev's REST API: GET /api/email lists what the SMTP sink received.
 const mailApi = process.env.VOLTWRIGHT_MAIL_API ?? 'http://127.0.0.1:1090'
 const s3Endpoint = process.env.NUXT_S3_ENDPOINT ?? 'http://127.0.0.1:4579'
 const mailSink = service('mail-sink', 'VOLTWRIGHT_MAIL_SINK', `${mailApi}/api/email`)

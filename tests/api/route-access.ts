@@ -1,4 +1,4 @@
-// Who may call each route, read from the handlers' guards (server/api) and DESIGN §4. The guards test fails
+// Who may call each route, read from the handlers' guards (server/api) and the permissions map (docs/architecture.md#roles). The guards test fails
 // when a route file has no entry here, so every new route is given a rule on purpose.
 import type { Role } from '../../shared/schemas/roles'
 import sharp from 'sharp'

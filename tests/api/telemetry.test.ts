@@ -44,7 +44,7 @@ describe('telemetry upload', async () => {
     return res
   }
 
-  it('stores the log, answers its summary under DESIGN §5\'s names, and the stored bytes come back equal', async () => {
+  it('stores the log, answers its summary under the names of docs/computation.md#telemetry-summary, and the stored bytes come back equal', async () => {
     const samples = syntheticDrive(car0, { rollbackM: 0.12 })
     const csv = telemetryCsv(samples, '\r\n')
     const res = await upload(tester, path, multipart(csv, 'forge-loop.csv', 'text/csv'))

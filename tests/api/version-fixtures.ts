@@ -32,7 +32,7 @@ export async function platformSchema(caller: Caller, key = 'fenlow-45') {
   return platforms.find(p => p.key === key)!.schema
 }
 
-// Written here from DESIGN §2 rather than taken from the app: keys sorted at every level, no whitespace.
+// Written here from docs/architecture.md#version-hash rather than taken from the app: keys sorted at every level, no whitespace.
 function sortedJson(x: unknown): string {
   if (x === null || typeof x !== 'object') return JSON.stringify(x)
   if (Array.isArray(x)) return `[${x.map(sortedJson).join(',')}]`

@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase } from './helpers'
 import { expectedContentHash } from './version-fixtures'
 
-// The seeded profiles match each demo car's stage, hash as DESIGN §2 says, and have their history.
+// The seeded profiles match each demo car's stage, hash as docs/architecture.md#version-hash says, and have their history.
 describe('the demo workshop\'s profiles', async () => {
   await useRunningServer()
   const engineer = await signIn('engineer@voltwright.test')

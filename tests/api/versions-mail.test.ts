@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, baseUrl, withDatabase } from './helpers'
 import { newCar, newProfile } from './version-fixtures'
 
-// maildev's REST API (PACKAGES.md): GET /api/email lists what the SMTP sink received.
+// maildev's REST API: GET /api/email lists what the SMTP sink received.
 const mailApi = process.env.VOLTWRIGHT_MAIL_API ?? 'http://127.0.0.1:1090'
 interface SunkMail { subject: string, text: string, html: string, to: { address: string }[] }
 

@@ -14,7 +14,7 @@ describe('profiles and versions: drafts, review and every refusal', async () => 
   const schema = await platformSchema(tuner)
   const events = (versionId: number) => withDatabase(c => c.query('SELECT action, "vehicleId", "actorId", data FROM audit_events WHERE "entityType" = $1 AND "entityId" = $2 ORDER BY id', ['version', String(versionId)]))
 
-  it('starts a new profile with version 1 as a draft at the drive unit\'s schema defaults, hashed as DESIGN §2 says', async () => {
+  it('starts a new profile with version 1 as a draft at the drive unit\'s schema defaults, hashed as docs/architecture.md#version-hash says', async () => {
     const v = await newProfile(tuner, car.id, { rationale: 'First cut' })
     expect(v).toMatchObject({ versionNo: 1, state: 'draft', parentVersionId: null, origin: 'workshop', lockVersion: 0, rationale: 'First cut' })
     // The defaults come from the platform's JSON Schema `default` keywords, read here through GET /api/platforms.

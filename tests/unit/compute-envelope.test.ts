@@ -9,7 +9,7 @@ const env: DriveEnvelope = {
   torqueCapNm: 200, powerCapKw: 80, motorMaxRpm: 10000, speedLimitKph: 120, finalDriveRatio: 8, drivetrainEfficiency: 0.9, rollingRadiusM: 0.3
 }
 
-describe('drive envelope T(ω) = min(torqueCap, powerCap/ω) (DESIGN §4)', () => {
+describe('drive envelope T(ω) = min(torqueCap, powerCap/ω) (docs/computation.md#drive-envelope)', () => {
   it('gives the torque cap below base speed and constant power above it', () => {
     const base = (80_000 / 200) // ω where the two caps meet, rad/s
     expect(motorTorqueNm(0, 200, 80)).toBe(200)
@@ -43,7 +43,7 @@ describe('drive envelope T(ω) = min(torqueCap, powerCap/ω) (DESIGN §4)', () =
   })
 })
 
-describe('road load (DESIGN §4)', () => {
+describe('road load (docs/computation.md#road-load)', () => {
   it('rolling resistance is Crr·m·g', () => {
     expect(rollingResistanceN(1000, 0.01)).toBeCloseTo(98.0665, 9)
   })

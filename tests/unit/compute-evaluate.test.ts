@@ -5,7 +5,7 @@ import { PARAMETER_NAMES } from '../../shared/compute/parameters'
 import type { VehicleSpec } from '../../shared/schemas/vehicle-spec'
 import { defaultParameters, marrick110, fenlow45 } from '../../shared/platforms/index'
 
-const FIGURE_NAMES = [ // DESIGN §4, in its order
+const FIGURE_NAMES = [ // docs/computation.md#figures, in its order
   'testMassKg', 'tyreDiameterMm', 'rollingRadiusM', 'maxWheelForceN', 'zeroTo50S', 'zeroTo100S', 'topSpeedKph',
   'topSpeedLimitedBy', 'maxStartGradePct', 'startGradeLimitedBy', 'creepHoldGradePct', 'liftOffDecelMs2',
   'brakeRegenDecelMs2', 'regenGripLimitMs2', 'peakDischargeCurrentA', 'chargeTime10to80H', 'powerRatioToOriginal',
@@ -16,7 +16,7 @@ const base = defaultParameters(marrick110)
 const run = (params: Record<string, unknown> = base, spec: VehicleSpec = exampleSpec) => evaluate(spec, marrick110, params)
 const paths = (e: ReturnType<typeof run>) => e.errors.map(x => x.path)
 
-describe('the shape of an evaluation (DESIGN §4)', () => {
+describe('the shape of an evaluation (docs/computation.md#figures)', () => {
   const e = run()
 
   it('has exactly the top-level keys and figure names of the contract', () => {

@@ -18,7 +18,7 @@ function uphillLoads(c: Chassis, theta: number) {
   return { front, rear }
 }
 
-describe('hill start, torque-limited: F = m·g·(sinθ + Crr·cosθ) (DESIGN §4)', () => {
+describe('hill start, torque-limited: F = m·g·(sinθ + Crr·cosθ) (docs/computation.md#hill-start)', () => {
   it.each([1000, 3000, 6000])('with %d N at the wheels the reported gradient balances the forces', (F) => {
     const theta = Math.atan(torqueLimitedTangent(F, chassis.massKg, crr))
     expect(chassis.massKg * g * (Math.sin(theta) + crr * Math.cos(theta))).toBeCloseTo(F, 6)

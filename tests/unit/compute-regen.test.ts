@@ -10,7 +10,7 @@ import { defaultParameters, marrick110 } from '../../shared/platforms/index'
 
 const drive: RegenDrive = { regenTorqueLimitNm: 200, batteryChargeLimitA: 100, packNominalVoltageV: 350, drivetrainEfficiency: 0.9 }
 
-describe('regen torque (DESIGN §4, regen)', () => {
+describe('regen torque (docs/computation.md#regen)', () => {
   it('is regenTorqueLimitNm·pct/100 when the charge limit does not bite', () => {
     expect(regenTorqueNm(20, 100, drive)).toBeCloseTo(40, 12)
   })
@@ -49,7 +49,7 @@ describe('regen deceleration at 50 km/h from evaluate', () => {
   })
 })
 
-describe('currents and charging (DESIGN §4, currents)', () => {
+describe('currents and charging (docs/computation.md#currents)', () => {
   it('peak discharge current is P/(η·V): 100 kW at 90 % and 350 V draws 317 A', () => {
     expect(peakDischargeCurrentA(100, 0.9, 350)).toBeCloseTo(100_000 / (0.9 * 350), 9)
     expect(peakDischargeCurrentA(100, 0.9, 350)).toBeCloseTo(317.46, 2)
@@ -67,7 +67,7 @@ describe('currents and charging (DESIGN §4, currents)', () => {
   })
 })
 
-describe('thermal derate (DESIGN §4, derate)', () => {
+describe('thermal derate (docs/computation.md#derate)', () => {
   it('is 100 % up to derate start, 0 % from cut-off, and linear between', () => {
     expect(torqueAvailablePct(20, 120, 150)).toBe(100)
     expect(torqueAvailablePct(120, 120, 150)).toBe(100)

@@ -52,7 +52,7 @@ describe('the example car', () => {
   })
 })
 
-describe('parameter names (DESIGN §3)', () => {
+describe('parameter names (docs/computation.md#parameters)', () => {
   it('are the eighteen of the contract, each once', () => {
     expect([...PARAMETER_NAMES].sort()).toEqual([
       'batteryChargeLimitA', 'batteryCutoffC', 'batteryDerateStartC', 'batteryDischargeLimitA', 'brakeRegenPct', 'creepSpeedKph',

@@ -53,7 +53,7 @@ describe('regen grip limit on the driven axle alone (derived from Gillespie load
   })
 })
 
-describe('traction-limited acceleration with load transfer (DESIGN §4)', () => {
+describe('traction-limited acceleration with load transfer (docs/computation.md#traction)', () => {
   const chassis: Chassis = { massKg: 1100, rearShare: 0.47, cgHeightM: 0.52, wheelbaseM: 2.4 }
   const base = { resistanceN: 150, inertialMassKg: 1100 * 1.05, mu: 0.8, chassis }
 

@@ -7,7 +7,7 @@ import { RULE_IDS } from '../../shared/compute/types'
 import { ulvane220, defaultParameters, marrick110 } from '../../shared/platforms/index'
 
 describe('the rule set', () => {
-  it('has exactly the ten rule ids of DESIGN §4', () => {
+  it('has exactly the ten rule ids of docs/computation.md#rules', () => {
     expect(Object.keys(rules)).toEqual([...RULE_IDS])
     expect([...RULE_IDS].sort()).toEqual(['creep-hold', 'current-limits', 'derate-band', 'hill-start', 'power-ratio', 'regen-grip-snow',
       'regen-grip-wet', 'stop-lamp', 'tyre-load', 'tyre-speed'])

@@ -7,7 +7,7 @@ const querySchema = z.object({ size: z.enum(['full', 'thumbnail']).default('full
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
   const { size } = await getValidatedQuery(event, zodValidator(querySchema))
-  const user = await requireStaff(event)
+  const user = await requirePermission(event, 'staff')
   const a = await Attachment.findOne({ where: { id, workshopId: user.workshopId } })
   if (!a) throw createError({ statusCode: 404, message: 'No such file in this workshop.' })
   const thumb = size === 'thumbnail' && a.thumbnailKey

@@ -2,7 +2,7 @@ import { activityQuerySchema } from '../../../shared/schemas/history'
 
 // The workshop's activity feed: every event, newest first, with the history's filters and an optional car.
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'auditor', 'admin', 'engineer')
+  const user = await requirePermission(event, 'activity.read')
   const { vehicleId, ...query } = await getValidatedQuery(event, zodValidator(activityQuerySchema))
   return readHistory({ workshopId: user.workshopId, vehicleId }, query)
 })

@@ -4,10 +4,9 @@ import { facetsQuerySchema } from '../../../shared/schemas/history'
 export default defineEventHandler(async (event) => {
   const { vehicleId } = await getValidatedQuery(event, zodValidator(facetsQuerySchema))
   if (vehicleId) {
-    const user = await requireVehicleAccess(event, vehicleId)
-    await requireStaff(event)
+    const user = await requireVehicleAccess(event, vehicleId, 'staff')
     return historyFacets({ workshopId: user.workshopId, vehicleId })
   }
-  const user = await requireRole(event, 'auditor', 'admin', 'engineer')
+  const user = await requirePermission(event, 'activity.read')
   return historyFacets({ workshopId: user.workshopId })
 })

@@ -1,5 +1,5 @@
 // Walks the workshop's whole chain and reports the first broken link, if any.
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'auditor', 'admin')
+  const user = await requirePermission(event, 'history.verify')
   return verifyChain(user.workshopId)
 })

@@ -1,5 +1,5 @@
 // Cars whose controller was last found holding something other than what was signed off.
 export default defineEventHandler(async (event) => {
-  const user = await requireStaff(event)
+  const user = await requirePermission(event, 'staff')
   return listDriftedCars(user.workshopId)
 })

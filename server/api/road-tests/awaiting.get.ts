@@ -1,4 +1,4 @@
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'tester')
+  const user = await requirePermission(event, 'road-tests.record')
   return awaitingRoadTests(user)
 })

@@ -1,4 +1,4 @@
 export default defineEventHandler(async (event) => {
-  const user = await requireStaff(event)
+  const user = await requirePermission(event, 'staff')
   return snagAssignees(user)
 })

@@ -2,6 +2,6 @@ import { snagListQuerySchema } from '../../../shared/schemas/snag'
 
 export default defineEventHandler(async (event) => {
   const query = await getValidatedQuery(event, zodValidator(snagListQuerySchema))
-  const user = await requireStaff(event)
+  const user = await requirePermission(event, 'staff')
   return listSnags(user, query)
 })

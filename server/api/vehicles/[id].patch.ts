@@ -2,8 +2,7 @@ import { vehicleUpdateSchema } from '../../../shared/schemas/vehicle'
 
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const { vehicle } = await requireVehicle(event, id)
-  const user = await requireRole(event, 'admin', 'tuner', 'engineer')
+  const { user, vehicle } = await requireVehicle(event, id, 'cars.write')
   const input = await readValidatedBody(event, zodValidator(vehicleUpdateSchema))
   return updateVehicle(user, vehicle, input)
 })

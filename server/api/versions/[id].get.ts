@@ -1,5 +1,5 @@
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const user = await requireStaff(event)
+  const user = await requirePermission(event, 'staff')
   return readVersion(user, id)
 })

@@ -1,4 +1,4 @@
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'tuner')
+  const user = await requirePermission(event, 'versions.write')
   return draftWorklist(user)
 })

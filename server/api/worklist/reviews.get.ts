@@ -1,4 +1,4 @@
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'engineer')
+  const user = await requirePermission(event, 'versions.review')
   return reviewWorklist(user)
 })

@@ -4,7 +4,7 @@ import { z } from 'zod'
 const bodySchema = z.record(z.string(), z.unknown(), { error: 'The settings must be a JSON object' })
 
 export default defineEventHandler(async (event) => {
-  const admin = await requireRole(event, 'admin')
+  const admin = await requirePermission(event, 'workshop.configure')
   const change = await readValidatedBody(event, zodValidator(bodySchema))
   return updateWorkshopSettings(admin, change)
 })

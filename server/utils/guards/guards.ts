@@ -2,7 +2,8 @@ import type { H3Event } from 'h3'
 import { z } from 'zod'
 import { QueryTypes } from 'sequelize'
 import { Vehicle } from '../../models'
-import { isStaff, type Role } from '../../../shared/schemas/roles'
+import { isStaff, roleLabels, type Role } from '../../../shared/schemas/roles'
+import { can, rolesFor, type Permission } from '../../../shared/utils/permissions'
 import { useDatabase } from '../database/db'
 
 export interface SignedIn { id: number, workshopId: number, email: string, name: string, roles: Role[] }
@@ -27,29 +28,31 @@ export async function requireUser(event: H3Event): Promise<SignedIn> {
   return signedIn
 }
 
-export async function requireRole(event: H3Event, ...allowed: Role[]): Promise<SignedIn> {
+// The permissions map (shared/utils/permissions.ts) says which roles may; this refuses everyone else.
+export async function requirePermission(event: H3Event, permission: Permission): Promise<SignedIn> {
   const user = await requireUser(event)
-  if (!user.roles.some(r => allowed.includes(r))) {
-    throw createError({ statusCode: 403, message: `This needs the role of ${allowed.join(' or ')}.` })
-  }
+  assertPermission(user, permission)
   return user
 }
 
-export async function requireStaff(event: H3Event): Promise<SignedIn> {
-  const user = await requireUser(event)
-  if (!isStaff(user.roles)) throw createError({ statusCode: 403, message: 'Only workshop staff can do this.' })
-  return user
+function assertPermission(user: SignedIn, permission: Permission) {
+  if (can(user.roles, permission)) return
+  if (permission === 'staff') throw createError({ statusCode: 403, message: 'Only workshop staff can do this.' })
+  const names = rolesFor(permission).map(r => roleLabels[r].toLowerCase())
+  throw createError({ statusCode: 403, message: `This needs the role of ${names.join(' or ')}.` })
 }
 
 export const idParamSchema = z.object({ id: z.coerce.number().int().positive().max(2147483647) })
 
 // A car of the signed-in person's workshop; a car owner reaches only their own. Anything else is 404.
-export async function requireVehicle(event: H3Event, id: number): Promise<{ user: SignedIn, vehicle: Vehicle }> {
+// With a permission, the car is looked up first (404 hides it from other workshops), then the role is checked.
+export async function requireVehicle(event: H3Event, id: number, permission?: Permission): Promise<{ user: SignedIn, vehicle: Vehicle }> {
   const user = await requireUser(event)
   const where: Record<string, unknown> = { id, workshopId: user.workshopId }
   if (!isStaff(user.roles)) where.ownerUserId = user.id
   const vehicle = await Vehicle.findOne({ where, include: ['platform'] })
   if (!vehicle) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
+  if (permission) assertPermission(user, permission)
   return { user, vehicle }
 }
 
@@ -60,10 +63,11 @@ export function vehicleScopeSql(user: SignedIn, alias: string): string {
 }
 
 // The same scope where the route needs only to know the car may be read (one plain query, no model).
-export async function requireVehicleAccess(event: H3Event, id: number): Promise<SignedIn> {
+export async function requireVehicleAccess(event: H3Event, id: number, permission?: Permission): Promise<SignedIn> {
   const user = await requireUser(event)
   const found = await useDatabase().query(`SELECT 1 FROM vehicles v WHERE v.id = :id AND ${vehicleScopeSql(user, 'v')}`,
     { replacements: { id, workshopId: user.workshopId, userId: user.id }, type: QueryTypes.SELECT })
   if (!found.length) throw createError({ statusCode: 404, message: 'No such car in this workshop.' })
+  if (permission) assertPermission(user, permission)
   return user
 }

@@ -26,10 +26,3 @@ export function zodValidator<S extends z.ZodType>(schema: S) {
   }
 }
 
-// The same answer for input that does not come through h3's validators.
-export function parseOr400<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
-  const result = schema.safeParse(input)
-  if (result.success) return result.data
-  const fields = zodFieldErrors(result.error)
-  throw createError({ statusCode: 400, message: summary(fields), data: { fields } })
-}

@@ -1,4 +1,4 @@
-// Recording and reading road tests of approved versions (DESIGN §5).
+// Recording and reading road tests of approved versions (docs/architecture.md#road-test).
 import { Op, type Transaction } from 'sequelize'
 import { Attachment, Platform, Profile, ProfileVersion, RoadTest, TelemetryLog, User, Vehicle } from '../../models'
 import type { RoadTestCheck } from '../../models/road-test'

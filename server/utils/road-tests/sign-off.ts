@@ -1,4 +1,4 @@
-// Sign-off (DESIGN §5): a passing road test by a tester who is not the author makes the version the one on
+// Sign-off (docs/architecture.md#sign-off): a passing road test by a tester who is not the author makes the version the one on
 // the car. One transaction with the profile row locked, so parallel sign-offs leave exactly one on-car version.
 import { Op, type Transaction } from 'sequelize'
 import { Attachment, Profile, ProfileVersion, RoadTest, Snag, TelemetryLog, User, Vehicle } from '../../models'

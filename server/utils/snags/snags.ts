@@ -3,12 +3,11 @@ import { Op, type WhereOptions } from 'sequelize'
 import { Attachment, RoadTest, Snag, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import { isStaff } from '../../../shared/schemas/roles'
+import { rolesFor } from '../../../shared/utils/permissions'
 import { unresolvedSnagStatuses, type SnagCreate, type SnagListQuery, type SnagUpdate, type SnagView } from '../../../shared/schemas/snag'
 import { jsonPatch } from '../../../shared/utils/json-patch'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
-
-export const SNAG_WRITERS = ['admin', 'tuner', 'engineer', 'tester'] as const
 
 const include = [
   { model: User, as: 'assignee', attributes: ['id', 'name'] },
@@ -106,6 +105,6 @@ export async function updateSnag(user: SignedIn, id: number, input: SnagUpdate) 
 
 // People a snag can be given to: the workshop's active staff.
 export async function snagAssignees(user: SignedIn) {
-  const people = await User.findAll({ where: { workshopId: user.workshopId, active: true, roles: { [Op.overlap]: [...SNAG_WRITERS] } }, attributes: ['id', 'name', 'roles'], order: [['name', 'ASC']] })
+  const people = await User.findAll({ where: { workshopId: user.workshopId, active: true, roles: { [Op.overlap]: [...rolesFor('snags.write')] } }, attributes: ['id', 'name', 'roles'], order: [['name', 'ASC']] })
   return { items: people.map(p => ({ id: p.id, name: p.name, roles: p.roles })), total: people.length }
 }

@@ -1,7 +1,7 @@
 // Object storage through the AWS SDK: S3 in production, s3rver on loopback in development and tests.
 import { randomUUID } from 'node:crypto'
 import type { Readable } from 'node:stream'
-import { S3Client, GetObjectCommand, DeleteObjectCommand, HeadObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3'
+import { S3Client, GetObjectCommand, DeleteObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3'
 import { Upload } from '@aws-sdk/lib-storage'
 
 let client: S3Client | undefined
@@ -15,7 +15,7 @@ export function objectStore(): S3Client {
     forcePathStyle: true,
     // s3rver knows one key pair, S3RVER/S3RVER; production sets real ones (NUXT_S3_ACCESS_KEY_ID, NUXT_S3_SECRET_ACCESS_KEY).
     credentials: { accessKeyId: config.s3AccessKeyId || 'S3RVER', secretAccessKey: config.s3SecretAccessKey || 'S3RVER' },
-    // Without these the SDK frames streamed bodies with checksums that s3rver stores verbatim (PACKAGES.md).
+    // Without these the SDK frames streamed bodies with checksums that s3rver stores verbatim, corrupting the file.
     requestChecksumCalculation: 'WHEN_REQUIRED',
     responseChecksumValidation: 'WHEN_REQUIRED',
     // A store that hangs must not hold a request for ever: give up on a silent connection or socket.
@@ -55,15 +55,6 @@ export async function getObjectStream(key: string): Promise<{ body: Readable, co
   return { body: res.Body as Readable, contentLength: res.ContentLength }
 }
 
-export async function objectExists(key: string): Promise<boolean> {
-  try {
-    await objectStore().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }))
-    return true
-  } catch (e) {
-    if ((e as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return false
-    throw e
-  }
-}
 
 // Best effort: a failed clean-up is logged, never allowed to hide the error that caused it.
 export async function deleteObjects(keys: (string | null | undefined)[]): Promise<void> {

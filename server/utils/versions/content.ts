@@ -15,7 +15,7 @@ export interface VersionContent {
   origin: VersionOrigin
 }
 
-// SHA-256 of the canonical JSON of the version's content (DESIGN §2), never of its state or review.
+// SHA-256 of the canonical JSON of the version's content (docs/architecture.md#version-hash), never of its state or review.
 export function versionContentHash(c: VersionContent): string {
   return sha256Hex(canonicalJson({
     profileId: c.profileId, versionNo: c.versionNo, parentVersionId: c.parentVersionId ?? null,

@@ -54,6 +54,3 @@ export function assertVersionState(v: ProfileVersion, allowed: VersionState[], d
   })
 }
 
-export function carName(vehicle: Vehicle) {
-  return `${vehicle.stockRef} ${vehicle.year} ${vehicle.make} ${vehicle.model}`
-}

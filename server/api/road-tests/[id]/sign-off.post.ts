@@ -1,5 +1,5 @@
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const user = await requireRole(event, 'tester')
+  const user = await requirePermission(event, 'road-tests.record')
   return signOffRoadTest(user, id)
 })

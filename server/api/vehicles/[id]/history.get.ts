@@ -4,7 +4,6 @@ import { historyQuerySchema } from '../../../../shared/schemas/history'
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
   const query = await getValidatedQuery(event, zodValidator(historyQuerySchema))
-  const user = await requireVehicleAccess(event, id)
-  await requireStaff(event)
+  const user = await requireVehicleAccess(event, id, 'staff')
   return readHistory({ workshopId: user.workshopId, vehicleId: id }, query)
 })

@@ -1,6 +1,5 @@
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const { vehicle } = await requireVehicle(event, id)
-  await requireStaff(event)
+  const { vehicle } = await requireVehicle(event, id, 'staff')
   return listReadbacks(vehicle)
 })

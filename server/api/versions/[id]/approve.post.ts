@@ -2,7 +2,7 @@ import { approveSchema } from '../../../../shared/schemas/profile'
 
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const user = await requireRole(event, 'engineer')
+  const user = await requirePermission(event, 'versions.review')
   const { comment } = await readValidatedBody(event, zodValidator(approveSchema))
   return decideVersion(user, id, 'approve', comment)
 })

@@ -3,7 +3,7 @@ import { rejectSchema } from '../../../../shared/schemas/profile'
 // Sending a version back needs a comment: the tuner has to know what to change.
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const user = await requireRole(event, 'engineer')
+  const user = await requirePermission(event, 'versions.review')
   const { comment } = await readValidatedBody(event, zodValidator(rejectSchema))
   return decideVersion(user, id, 'reject', comment)
 })

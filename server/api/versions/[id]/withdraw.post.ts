@@ -1,5 +1,5 @@
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const user = await requireRole(event, 'tuner')
+  const user = await requirePermission(event, 'versions.write')
   return withdrawVersion(user, id)
 })
