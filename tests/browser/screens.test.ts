@@ -5,11 +5,12 @@ import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
 import { newCar } from '../api/road-test-fixtures'
 
 // What each of the workshop's people opens in a day; the car and version are made here, with a long unbroken rationale.
+const tabs = ['versions', 'road-tests', 'snags', 'readbacks', 'history']
 function pagesFor(carId: number, versionId: number, ownCarId: number): Record<string, string[]> {
   return {
     'tuner@voltwright.test': ['/', '/cars', `/cars/${carId}`, `/versions/${versionId}`, '/snags'],
     'engineer@voltwright.test': ['/', '/activity', `/cars/${carId}`, `/versions/${versionId}`],
-    'tester@voltwright.test': ['/', '/cars', `/cars/${carId}`, '/snags'],
+    'tester@voltwright.test': ['/', '/cars', `/cars/${carId}`, ...tabs.map(t => `/cars/${carId}/${t}`), '/snags'],
     'auditor@voltwright.test': ['/', '/activity', `/cars/${carId}`, `/cars/${carId}/history`],
     'admin@voltwright.test': ['/', '/admin/people', '/admin/workshop', '/admin/platforms', '/activity'],
     'client@voltwright.test': ['/', `/my-cars/${ownCarId}`]
@@ -90,6 +91,27 @@ describe('every main page fits the screen, as each of its people sees it', async
       await page.locator('input[type=file]').setInputFiles({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') })
       await expect.poll(() => page.getByRole('alert').filter({ hasText: 'notes.txt was not added: only JPEG, PNG or WebP photos' }).count()).toBe(1)
       await shot(page, 'screens-02-photo-refused')
+    } finally {
+      await context.close()
+    }
+  })
+
+  it('opens a car on an overview that fits two screens, each part a tab of its own reachable by URL', async () => {
+    const { context, page } = await launch(1280)
+    try {
+      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tuner@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      const demo = (await tuner.call('GET', '/api/vehicles?q=OF-104')).body.items[0] as { id: number }
+      await page.goto(`${baseUrl}/cars/${demo.id}`, { waitUntil: 'networkidle' })
+      await expect.poll(() => page.locator('[data-on-car]').count()).toBeGreaterThan(0)
+      expect(await page.evaluate(() => document.documentElement.scrollHeight)).toBeLessThanOrEqual(2 * 900)
+      await shot(page, 'screens-03-car-overview')
+      const nav = page.getByRole('navigation', { name: 'The car\'s pages' })
+      for (const [label, path, heading] of [['Settings and versions', 'versions', /profiles/i], ['Road tests', 'road-tests', /Road tests/], ['Snags', 'snags', /Snag list/], ['Read-backs', 'readbacks', /read-back/i], ['History', 'history', /History/]] as const) {
+        await nav.getByRole('link', { name: label }).click()
+        await page.waitForURL(u => u.pathname === `/cars/${demo.id}/${path}`)
+        await expect.poll(() => page.getByRole('heading', { level: 2, name: heading }).count(), label).toBeGreaterThan(0)
+        expect(await nav.getByRole('link', { name: label }).getAttribute('aria-current')).toBe('page')
+      }
     } finally {
       await context.close()
     }
