@@ -37,6 +37,8 @@ export default defineNuxtConfig({
     public: { baseUrl: 'http://localhost:3000' }
   },
   nitro: {
+    // The tester is often on a phone with little signal: serve gzip and brotli copies of the built assets.
+    compressPublicAssets: { gzip: true, brotli: true },
     // Sequelize loads its dialect by name at run time; pdfkit reads its font data and sharp loads its
     // native binding from their own folders: keep these as real node modules.
     externals: { external: ['sequelize', 'pg', 'pg-hstore', 'pdfkit', 'sharp'] },
