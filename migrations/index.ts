@@ -7,6 +7,7 @@ import * as roadTestFiles from './20261201-0006-road-test-files'
 import * as history from './20261201-0007-history'
 import * as revokedSessions from './20261202-0008-revoked-sessions'
 import * as platformKeys from './20261202-0009-platform-keys-per-workshop'
+import * as roadTestIdempotency from './20261203-6001-road-test-idempotency'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -16,5 +17,6 @@ export const migrations = [
   { name: '20261201-0006-road-test-files', ...roadTestFiles },
   { name: '20261201-0007-history', ...history },
   { name: '20261202-0008-revoked-sessions', ...revokedSessions },
-  { name: '20261202-0009-platform-keys-per-workshop', ...platformKeys }
+  { name: '20261202-0009-platform-keys-per-workshop', ...platformKeys },
+  { name: '20261203-6001-road-test-idempotency', ...roadTestIdempotency }
 ]
