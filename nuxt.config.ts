@@ -5,6 +5,9 @@ export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', 'nuxt-security', '@nuxt/eslint'],
   devtools: { enabled: false },
+  // Links fetch the code of the page they lead to when touched or hovered, not whenever they come into view:
+  // a phone at the roadside downloads only the page it is on.
+  experimental: { defaults: { nuxtLink: { prefetchOn: { visibility: false, interaction: true } } } },
   telemetry: false,
   css: [
     '@fontsource/ibm-plex-sans/400.css',

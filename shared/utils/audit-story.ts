@@ -165,8 +165,9 @@ export function eventStory(e: HistoryEntry): EventStory {
     const key = path.split('/').pop() ?? ''
     if ((key === 'assigneeId' || key === 'ownerUserId') && v !== null && v !== undefined) return people[String(v)] ?? 'someone no longer listed'
     if (key === 'platformKey' && typeof v === 'string') return findPlatform(v)?.name ?? v
-    const labelled = knownChangeLabel(e.entityType, path) !== undefined
-    return valueText(v, labelled && unitOf(key) ? '' : key)
+    // The unit goes with the value unless the field's label already names it ("Power cap, kW").
+    const label = knownChangeLabel(e.entityType, path)
+    return valueText(v, label && /, \S+$/.test(label) && unitOf(key) ? '' : key)
   }
   return {
     sentence: `${sentenceOf(e, d)}.`,

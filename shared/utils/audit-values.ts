@@ -34,18 +34,19 @@ export function keyLabel(key: string): string {
   return `${w[0]!.toUpperCase()}${w.slice(1)}${unit ? `, ${unit}` : ''}`
 }
 
-export function numberText(x: number, decimals?: number): string {
+// `decimals` fixes the figures after the point; `upTo` only limits them (5 %, 12.5 %).
+export function numberText(x: number, decimals?: number, upTo = false): string {
   if (!Number.isFinite(x)) return '—'
   const abs = Math.abs(x)
   const d = decimals ?? (Number.isInteger(x) ? 0 : abs >= 10 ? 1 : abs >= 1 ? 2 : 3)
-  return x.toLocaleString('en-GB', { minimumFractionDigits: decimals ?? 0, maximumFractionDigits: d })
+  return x.toLocaleString('en-GB', { minimumFractionDigits: upTo ? 0 : decimals ?? 0, maximumFractionDigits: d })
 }
 
-// "1.20 m/s²", "134 Wh", "9 °C"
+// "1.20 m/s²" (decelerations keep two figures, as the trade compares them), "134 Wh", "9 °C", "5 %"
 export function measureText(x: number | null | undefined, key: string): string {
   if (x === null || x === undefined) return '—'
   const u = unitOf(key)
-  return u ? `${numberText(x, u.decimals)} ${u.unit}` : numberText(x)
+  return u ? `${numberText(x, u.decimals, u.unit !== 'm/s²')} ${u.unit}` : numberText(x)
 }
 
 export function bytesText(bytes: number): string {

@@ -141,7 +141,7 @@ describe('a car from the tuner\'s first draft to the owner\'s handover sheet', a
     await auditor.getByRole('link', { name: 'Print view' }).click()
     await expect.poll(() => heading(auditor)).toBe(`History of ${car.stockRef} · 1967 Testwick Journey Coupé`)
     // Each entry opens with a sentence of what happened and who did it; the page lists the newest first.
-    const entries = auditor.getByRole('main').getByRole('listitem')
+    const entries = auditor.getByRole('main').locator('ol > li')
     await expect.poll(() => entries.count()).toBe(14)
     const story = await entries.evaluateAll(items => items.map(li => li.querySelector('[data-sentence]')!.textContent!.trim()).reverse())
     const expected = [
