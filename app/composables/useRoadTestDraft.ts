@@ -27,6 +27,7 @@ export function freshRoadTestDraft(keys: readonly string[]): RoadTestDraftState 
 export function useRoadTestDraft(versionId: number, keys: readonly string[]) {
   const draft = ref<RoadTestDraftState>(freshRoadTestDraft(keys))
   const restored = ref(false)
+  let stopKeeping = () => {}
   onMounted(() => {
     try {
       const kept = JSON.parse(localStorage.getItem(storageKey(versionId)) ?? 'null') as RoadTestDraftState | null
@@ -35,11 +36,15 @@ export function useRoadTestDraft(versionId: number, keys: readonly string[]) {
         restored.value = true
       }
     } catch { /* a draft that does not read is started afresh */ }
-    watch(draft, (d) => {
+    stopKeeping = watch(draft, (d) => {
       localStorage.setItem(storageKey(versionId), JSON.stringify({ ...d, checks: d.checks.map(c => ({ ...c, photos: [] })) }))
     }, { deep: true, immediate: true })
   })
-  const forget = () => localStorage.removeItem(storageKey(versionId))
+  // Once the server has the record the phone keeps nothing of it, and writes no more.
+  const forget = () => {
+    stopKeeping()
+    localStorage.removeItem(storageKey(versionId))
+  }
   return { draft, restored, forget }
 }
 
