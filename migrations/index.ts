@@ -7,6 +7,8 @@ import * as roadTestFiles from './20261201-0006-road-test-files'
 import * as history from './20261201-0007-history'
 import * as revokedSessions from './20261202-0008-revoked-sessions'
 import * as platformKeys from './20261202-0009-platform-keys-per-workshop'
+import * as sessionEpoch from './20261203-2001-session-epoch'
+import * as historyForm2 from './20261203-3001-history-form-2'
 import * as roadTestIdempotency from './20261203-6001-road-test-idempotency'
 
 export const migrations = [
@@ -18,5 +20,7 @@ export const migrations = [
   { name: '20261201-0007-history', ...history },
   { name: '20261202-0008-revoked-sessions', ...revokedSessions },
   { name: '20261202-0009-platform-keys-per-workshop', ...platformKeys },
+  { name: '20261203-2001-session-epoch', ...sessionEpoch },
+  { name: '20261203-3001-history-form-2', ...historyForm2 },
   { name: '20261203-6001-road-test-idempotency', ...roadTestIdempotency }
 ]

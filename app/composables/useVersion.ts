@@ -24,6 +24,8 @@ export function useVersion(id: MaybeRefOrGetter<number>) {
 
   return {
     ...data,
+    // Awaited by a page that needs the version in its setup (the server renders the draft's settings).
+    ready: Promise.resolve(data).then(() => undefined),
     save,
     startFrom,
     submit: (justifications: Record<string, string>) => act('submit', { justifications }),

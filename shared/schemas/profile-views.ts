@@ -22,6 +22,8 @@ export interface VersionSummary {
   parentVersionId: number | null
   state: VersionState
   origin: VersionOrigin
+  // The road test a roadside version was recorded on.
+  roadTestId: number | null
   author: PersonRef | null
   rationale: string
   dangerCount: number | null

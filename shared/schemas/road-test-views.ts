@@ -2,6 +2,7 @@
 import type { CheckKey, CheckVerdict } from './road-test'
 import type { TelemetrySummary } from '../telemetry/summary'
 import type { TelemetrySeries } from '../telemetry/downsample'
+import type { VersionState } from './version'
 
 export interface CheckView { key: CheckKey, verdict: CheckVerdict, values: Record<string, number | string | null>, note: string }
 export interface AttachmentView { id: number, filename: string, contentType: string, bytes: number, sha256: string, caption: string, hasThumbnail: boolean, createdAt: string }
@@ -10,7 +11,7 @@ export interface TelemetryView { id: number, attachment: AttachmentView, summary
 export interface RoadTestView {
   id: number
   vehicleId: number
-  version: { id: number, versionNo: number, state: string, profileId: number, profileName: string, authorId: number, contentHash: string }
+  version: { id: number, versionNo: number, state: VersionState, profileId: number, profileName: string, authorId: number, contentHash: string }
   vehicle: { id: number, stockRef: string, make: string, model: string, year: number, status: string }
   tester: { id: number, name: string }
   testedAt: string

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { justificationsSchema, parametersSchema } from './profile'
 
 // A road test (docs/architecture.md#road-test): conditions, one verdict per mandatory check with its measured values.
 export const surfaces = ['dry', 'wet', 'snow'] as const
@@ -83,8 +84,10 @@ export const roadTestCreateSchema = z.object({
 })
 export type RoadTestCreate = z.output<typeof roadTestCreateSchema>
 
+// A roadside change is sent for review at once, so it carries the submit's justifications.
 export const roadsideVersionSchema = z.object({
-  parameters: z.record(z.string(), z.number()),
-  rationale: z.string().trim().min(1, 'Say what you changed at the roadside and why').max(4000)
+  parameters: parametersSchema,
+  rationale: z.string().trim().min(1, 'Say what you changed at the roadside and why').max(4000),
+  justifications: justificationsSchema
 }).strict()
 export type RoadsideVersionInput = z.output<typeof roadsideVersionSchema>

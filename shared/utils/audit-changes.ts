@@ -14,11 +14,14 @@ export function isPatch(x: unknown): x is PatchOp[] {
   return Array.isArray(x) && x.every(o => isObject(o) && typeof o.op === 'string' && typeof o.path === 'string')
 }
 
-// RFC 6901: "/a~1b/c~0d" → ["a/b", "c~d"].
+// RFC 6901: "/a~1b/c~0d" → ["a/b", "c~d"]. (The history folds many of these: the usual path has no "~".)
 export function decodePointer(path: string): string[] {
   if (path === '') return []
-  return path.slice(1).split('/').map(s => s.replace(/~1/g, '/').replace(/~0/g, '~'))
+  const keys = path.slice(1).split('/')
+  return path.includes('~') ? keys.map(s => s.replace(/~1/g, '/').replace(/~0/g, '~')) : keys
 }
+
+const encodeKey = (k: string) => (k.includes('~') || k.includes('/') ? k.replace(/~/g, '~0').replace(/\//g, '~1') : k)
 
 export function pointerGet(doc: unknown, path: string): { found: boolean, value?: unknown } {
   let at: unknown = doc
@@ -80,11 +83,22 @@ function removeAt(root: unknown, keys: string[]): unknown {
   return root
 }
 
-// Every leaf of a snapshot as a pointer and its value; arrays count as one value.
+// Every leaf of a snapshot as a pointer and its value; arrays count as one value, an empty object as one leaf.
 export function flattenLeaves(value: unknown, prefix = ''): { path: string, value: unknown }[] {
   if (!isObject(value)) return [{ path: prefix, value }]
-  const rows = Object.entries(value).flatMap(([k, v]) => flattenLeaves(v, `${prefix}/${k.replace(/~/g, '~0').replace(/\//g, '~1')}`))
+  const rows: { path: string, value: unknown }[] = []
+  collectLeaves(value, prefix, rows)
   return rows.length || !prefix ? rows : [{ path: prefix, value }]
+}
+
+function collectLeaves(value: Record<string, unknown>, prefix: string, rows: { path: string, value: unknown }[]) {
+  for (const k of Object.keys(value)) {
+    const path = `${prefix}/${encodeKey(k)}`
+    const v = value[k]
+    const before = rows.length
+    if (isObject(v)) collectLeaves(v, path, rows)
+    if (rows.length === before) rows.push({ path, value: v })
+  }
 }
 
 function beforeOf(path: string, op: string, tests: Map<string, unknown>, snapshot: unknown, fold?: KnownState): Pick<ChangeRow, 'before' | 'beforeKnown'> {

@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase } from './helpers'
 import { approvedVersion, newCar, newProfile, passingChecks, recordRoadTest, roadTestBody } from './road-test-fixtures'
+import { allJustified } from './version-fixtures'
 
 await useRunningServer()
 
@@ -56,6 +57,25 @@ describe('road tests', async () => {
     expect(res.body.data.state).toBe('in-review')
   })
 
+  it('takes a road test dated between the version\'s approval and now, and refuses any other date with a plain message', async () => {
+    const approvedAt = new Date((await tester.call('GET', `/api/versions/${versionId}`)).body.decidedAt)
+    const early = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: new Date(approvedAt.getTime() - 60_000).toISOString() })
+    expect(early.status).toBe(400)
+    expect(early.body.message).toContain('before version')
+    expect(early.body.data.fields[0].path).toBe('testedAt')
+    const future = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: new Date(Date.now() + 60 * 60_000).toISOString() })
+    expect(future.status).toBe(400)
+    expect(future.body.message).toContain('in the future')
+    const years = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: '1999-06-01T10:00:00Z' })
+    expect(years.status).toBe(400)
+    const between = new Date(Math.min(approvedAt.getTime() + 1000, Date.now()))
+    const ok = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: between.toISOString() })
+    expect(ok.status).toBe(201)
+    expect(ok.body.testedAt).toBe(between.toISOString())
+    // A phone's clock a minute ahead of the server's is let through.
+    expect((await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: new Date(Date.now() + 60_000).toISOString() })).status).toBe(201)
+  })
+
   it('names each missing or wrong part of the record', async () => {
     const noHill = await tester.call('POST', `/api/versions/${versionId}/road-tests`, roadTestBody({ checks: passingChecks().slice(1) }))
     expect(noHill.status).toBe(400)
@@ -101,7 +121,7 @@ describe('roadside changes', async () => {
   const tested = await withDatabase(async c => (await c.query('SELECT parameters FROM profile_versions WHERE id = $1', [versionId])).rows[0].parameters)
 
   it('records the change as the next version, from the roadside, in review, and mails the engineers', async () => {
-    const res = await tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, liftOffRegenPct: tested.liftOffRegenPct - 5 }, rationale: 'Lift-off felt abrupt on the wet bend' })
+    const res = await tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, liftOffRegenPct: tested.liftOffRegenPct - 5 }, rationale: 'Lift-off felt abrupt on the wet bend', justifications: allJustified() })
     expect(res.status).toBe(201)
     expect(res.body).toMatchObject({ versionNo: 2, parentVersionId: versionId, state: 'in-review', origin: 'roadside', roadTestId, profileId })
     expect(res.body.contentHash).toMatch(/^[0-9a-f]{64}$/)
@@ -112,7 +132,7 @@ describe('roadside changes', async () => {
   })
 
   it('numbers parallel roadside changes without gaps or duplicates', async () => {
-    const answers = await Promise.all([1, 2, 3].map(i => tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, creepTorqueNm: tested.creepTorqueNm - i }, rationale: `Creep try ${i}` })))
+    const answers = await Promise.all([1, 2, 3].map(i => tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, creepTorqueNm: tested.creepTorqueNm - i }, rationale: `Creep try ${i}`, justifications: allJustified() })))
     expect(answers.map(a => a.status)).toEqual([201, 201, 201])
     expect(answers.map(a => a.body.versionNo).sort()).toEqual([3, 4, 5])
   })

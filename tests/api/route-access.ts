@@ -38,6 +38,7 @@ export const routeAccess: Record<string, Access> = {
   'audit/events.get.ts': { roles: ['auditor', 'admin', 'engineer'], foreign: 'allowed' },
   'audit/facets.get.ts': { roles: ['auditor', 'admin', 'engineer'], foreign: 'allowed' },
   'audit/verify.get.ts': { roles: ['auditor', 'admin'], foreign: 'allowed' },
+  'audit/head-mail.post.ts': { roles: ['auditor', 'admin'], foreign: 'allowed' },
   'auth/login.post.ts': { roles: all, anonymous: true, foreign: 'allowed' },
   'auth/logout.post.ts': { roles: all, anonymous: true, foreign: 'allowed' },
   'auth/me.get.ts': { roles: all, foreign: 'allowed' },

@@ -6,6 +6,7 @@ import { compareReadback } from '../../../shared/utils/readback-compare'
 import { schemaProperties } from '../../../shared/compute/parameter-input'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
+import { assertKnownSettings } from '../platforms/evaluation'
 import { queueMail, peopleWithRole, absoluteUrl } from '../mail/outbox'
 
 // The profiles whose signed-off version is on the car: what a read-back is compared with.
@@ -49,12 +50,8 @@ async function profileFor(vehicle: Vehicle, body: ReadbackBody) {
 }
 
 function checkParameters(vehicle: Vehicle, found: Record<string, number>, prefix: string) {
+  if (vehicle.platform) assertKnownSettings(vehicle.platform, found, prefix)
   const known = schemaProperties(vehicle.platform?.schema)
-  const unknown = Object.keys(found).filter(k => !Object.hasOwn(known, k))
-  if (unknown.length) {
-    const fields = unknown.map(k => ({ path: `${prefix}.${k}`, message: `Not a parameter of the ${vehicle.platform?.name ?? 'car\'s'} drive unit` }))
-    throw createError({ statusCode: 400, message: `Please check: ${fields.map(f => f.path).join(', ')} (not parameters of this drive unit)`, data: { fields } })
-  }
   return Object.fromEntries(Object.entries(known).map(([k, p]) => [k, typeof p.multipleOf === 'number' ? p.multipleOf : 0]))
 }
 

@@ -1,9 +1,8 @@
-import { QueryTypes } from 'sequelize'
 import { Platform, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { VehicleCreate, VehicleListQuery, VehicleUpdate, VehicleView } from '../../../shared/schemas/vehicle'
 import { jsonPatch } from '../../../shared/utils/json-patch'
-import { useDatabase } from '../database/db'
+import { selectRows, useDatabase } from '../database/db'
 import { vehicleScopeSql } from '../guards/guards'
 import { appendAuditEvent } from '../history/audit'
 import { findWorkshopPlatform } from '../platforms/platforms'
@@ -31,11 +30,10 @@ export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
     where.push(`(${['make', 'model', '"stockRef"', 'registration'].map(f => `v.${f} ILIKE :like`).join(' OR ')})`)
     replacements.like = `%${q.q.replace(/[\\%_]/g, m => `\\${m}`)}%`
   }
-  const rows = await useDatabase().query<ListRow>(
+  const rows = await selectRows<ListRow>(
     `SELECT v.*, pl.key AS "platformKey", pl.name AS "platformName", o.name AS "ownerName", count(*) OVER () AS total
        FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" LEFT JOIN users o ON o.id = v."ownerUserId"
-      WHERE ${where.join(' AND ')} ORDER BY v."${q.sort}" ${q.dir === 'desc' ? 'DESC' : 'ASC'}, v.id ASC LIMIT :limit OFFSET :offset`,
-    { replacements, type: QueryTypes.SELECT })
+      WHERE ${where.join(' AND ')} ORDER BY v."${q.sort}" ${q.dir === 'desc' ? 'DESC' : 'ASC'}, v.id ASC LIMIT :limit OFFSET :offset`, replacements)
   const total = rows.length ? Number(rows[0]!.total) : q.page === 1 ? 0 : await countVehicles(where.join(' AND '), replacements)
   const items = rows.map(r => vehicleView({
     ...r, platform: r.platformKey ? { key: r.platformKey, name: r.platformName } : undefined,
@@ -48,7 +46,7 @@ type ListRow = Vehicle & { platformKey: string | null, platformName: string, own
 
 // A page past the end still reports how many cars there are.
 async function countVehicles(where: string, replacements: Record<string, unknown>) {
-  const [row] = await useDatabase().query<{ n: string }>(`SELECT count(*) AS n FROM vehicles v WHERE ${where}`, { replacements, type: QueryTypes.SELECT })
+  const [row] = await selectRows<{ n: string }>(`SELECT count(*) AS n FROM vehicles v WHERE ${where}`, replacements)
   return Number(row!.n)
 }
 

@@ -9,6 +9,7 @@ import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas
 import type { TelemetrySummary } from '../../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './words'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
+import { recordedVersionActors } from '../history/recorded-names'
 
 const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
 
@@ -35,14 +36,17 @@ function logLines(s: TelemetrySummary | undefined) {
 }
 
 async function profileSheet(vehicle: Vehicle, profile: Profile, version: ProfileVersion): Promise<HandoverProfile> {
-  const [author, review, rt] = await Promise.all([
+  const [author, review, rt, recorded] = await Promise.all([
     User.findByPk(version.authorId, { attributes: ['name'] }),
     Review.findOne({ where: { versionId: version.id, decision: 'approve' }, order: [['id', 'DESC']], include: [{ model: User, as: 'reviewer', attributes: ['name'] }] }),
-    RoadTest.findOne({ where: { versionId: version.id, verdict: 'pass' }, order: [['id', 'DESC']], include: [{ model: User, as: 'tester', attributes: ['name'] }] }).then(async r => r?.signed ? r : null)
+    RoadTest.findOne({ where: { versionId: version.id, verdict: 'pass' }, order: [['id', 'DESC']], include: [{ model: User, as: 'tester', attributes: ['name'] }] }).then(async r => r?.signed ? r : null),
+    recordedVersionActors(vehicle.workshopId, version.id)
   ])
   const log = rt ? await TelemetryLog.findOne({ where: { roadTestId: rt.id }, order: [['id', 'DESC']] }) : null
   const evaluation = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(vehicle.workshopId))
-  const tester = (rt as RoadTest & { tester?: User } | null)?.tester?.name ?? ''
+  // Names as the history recorded them when each acted; the person's name today only where it recorded none.
+  const tester = rt ? recorded['version.signed-off'] ?? (rt as RoadTest & { tester?: User }).tester?.name ?? '' : ''
+  const approver = review ? recorded['version.approved'] ?? (review as Review & { reviewer?: User }).reviewer?.name : undefined
   return {
     profileName: profile.name, versionNo: version.versionNo, versionId: version.id, signedOffAt: rt?.signed?.at ?? null,
     settings: settingLines(version.parameters, vehicle.platform!.schema), figures: figureLines(evaluation, vehicle.spec),
@@ -54,8 +58,8 @@ async function profileSheet(vehicle: Vehicle, profile: Profile, version: Profile
       log: logLines(log?.summary as TelemetrySummary | undefined)
     } : null,
     people: [
-      { role: 'Proposed by', name: author?.name ?? '—', at: (version.submittedAt ?? version.createdAt)?.toISOString() ?? null, hash: version.contentHash, hashLabel: 'settings hash' },
-      { role: 'Approved by', name: (review as Review & { reviewer?: User } | null)?.reviewer?.name ?? '—', at: review ? new Date(review.createdAt).toISOString() : (version.decidedAt?.toISOString() ?? null), hash: version.contentHash, hashLabel: 'settings hash' },
+      { role: 'Proposed by', name: recorded['version.created'] ?? author?.name ?? '—', at: (version.submittedAt ?? version.createdAt)?.toISOString() ?? null, hash: version.contentHash, hashLabel: 'settings hash' },
+      { role: 'Approved by', name: approver ?? '—', at: review ? new Date(review.createdAt).toISOString() : (version.decidedAt?.toISOString() ?? null), hash: version.contentHash, hashLabel: 'settings hash' },
       { role: 'Road-tested and signed off by', name: tester || '—', at: rt?.signed?.at ?? null, hash: rt?.signed?.contentHash ?? null, hashLabel: 'road-test record hash' }
     ]
   }

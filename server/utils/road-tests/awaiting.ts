@@ -32,7 +32,9 @@ export async function roadTestBrief(user: SignedIn, versionId: number) {
   return {
     version: { id: version.id, versionNo: version.versionNo, state: version.state, authorId: version.authorId, parameters: version.parameters },
     profile: { id: profile.id, name: profile.name },
-    vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null },
+    vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null, spec: vehicle.spec },
+    // The drive unit as the browser's evaluation needs it, so a roadside change shows its warnings as it is typed.
+    platform: { key: vehicle.platform!.key, name: vehicle.platform!.name, motorMaxRpm: vehicle.platform!.motorMaxRpm, schema: vehicle.platform!.schema },
     platformSchema: vehicle.platform?.schema ?? null,
     expected: {
       maxStartGradePct: figures.maxStartGradePct, creepHoldGradePct: figures.creepHoldGradePct, liftOffDecelMs2: figures.liftOffDecelMs2,

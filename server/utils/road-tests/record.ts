@@ -6,9 +6,9 @@ import type { SignedIn } from '../guards/guards'
 import { isStaff } from '../../../shared/schemas/roles'
 import type { RoadTestCreate } from '../../../shared/schemas/road-test'
 import type { AttachmentView, RoadTestListItem, RoadTestView } from '../../../shared/schemas/road-test-views'
-import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
+import { requireTransition } from '../versions/views'
 
 export interface TestedVersion { version: ProfileVersion, profile: Profile, vehicle: Vehicle }
 
@@ -25,10 +25,16 @@ export async function findTestedVersion(user: SignedIn, versionId: number, trans
   return { version, profile, vehicle }
 }
 
-export function requireApproved(version: ProfileVersion, doing: string) {
-  if (version.state !== 'approved') {
-    const label = versionStateLabels[version.state as VersionState] ?? version.state
-    throw createError({ statusCode: 409, message: `Version ${version.versionNo} is ${label.toLowerCase()} (${version.state}); only an approved version can be ${doing}.`, data: { state: version.state } })
+// A road test's date lies between the version's approval and now; a phone's clock may run a little ahead of
+// the server's, so "now" has two minutes' room (docs/version-lifecycle.md).
+export const CLOCK_SKEW_MS = 2 * 60_000
+const minute = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ')
+
+export function requireTestedAtInRange(version: ProfileVersion, testedAt: Date, now = new Date()) {
+  const field = (message: string) => createError({ statusCode: 400, message, data: { fields: [{ path: 'testedAt', message }] } })
+  if (testedAt.getTime() > now.getTime() + CLOCK_SKEW_MS) throw field(`The road test's date (${minute(testedAt)} UTC) is in the future.`)
+  if (version.decidedAt && testedAt.getTime() < new Date(version.decidedAt).getTime()) {
+    throw field(`The road test's date (${minute(testedAt)} UTC) is before version ${version.versionNo} was approved (${minute(new Date(version.decidedAt))} UTC); only an approved version can be road-tested.`)
   }
 }
 
@@ -46,12 +52,14 @@ export async function recordRoadTest(user: SignedIn, versionId: number, input: R
   const earlier = await alreadySent(user, versionId, input.idempotencyKey)
   if (earlier) return { ...await readRoadTest(user, earlier.id), repeated: true }
   const { version, vehicle } = await findTestedVersion(user, versionId)
-  requireApproved(version, 'road-tested')
+  requireTransition(version, 'road-test', user)
+  const testedAt = input.testedAt ?? new Date()
+  requireTestedAtInRange(version, testedAt)
   let repeated = false
   const id = await useDatabase().transaction(async (transaction) => {
     const rt = await RoadTest.create({
       workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id, idempotencyKey: input.idempotencyKey ?? null,
-      testedAt: input.testedAt ?? new Date(), conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict
+      testedAt, conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict
     }, { transaction })
     // A car on its first road test has moved on from the workshop floor.
     if (vehicle.status === 'intake' || vehicle.status === 'converting') {

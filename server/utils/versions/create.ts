@@ -1,15 +1,14 @@
-import type { Transaction } from 'sequelize'
 import { Profile, ProfileVersion, type Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import { defaultParameters } from '../../../shared/platforms'
 import { jsonPatch } from '../../../shared/utils/json-patch'
 import type { ProfileCreate, VersionCreate, VersionUpdate } from '../../../shared/schemas/profile'
-import type { VersionOrigin } from '../../../shared/schemas/version'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { versionContentHash } from './content'
+import { insertVersion } from './insert'
 import { readVersion } from './read'
-import { loadVersion, assertVersionState } from './views'
+import { loadVersion, requireTransition } from './views'
 
 // Two people naming a profile the same at the same moment: the unique index decides, the loser hears why.
 function sameNameRace(e: unknown): never {
@@ -19,30 +18,6 @@ function sameNameRace(e: unknown): never {
   throw e
 }
 
-interface NewVersion { parameters: Record<string, number>, rationale: string, parent: ProfileVersion | null, origin: VersionOrigin }
-
-// The next number is max + 1, read after the profile row is locked, so concurrent creations queue and
-// never share or skip a number (the database trigger checks the same).
-async function insertVersion(t: Transaction, user: SignedIn, profile: Profile, vehicleId: number, input: NewVersion) {
-  await Profile.findByPk(profile.id, { transaction: t, lock: t.LOCK.UPDATE })
-  const max = await ProfileVersion.max<number | null, ProfileVersion>('versionNo', { where: { profileId: profile.id }, transaction: t })
-  const content = {
-    profileId: profile.id, versionNo: (max ?? 0) + 1, parentVersionId: input.parent?.id ?? null,
-    parameters: input.parameters, rationale: input.rationale, authorId: user.id, origin: input.origin
-  }
-  const contentHash = versionContentHash(content)
-  const version = await ProfileVersion.create({ ...content, workshopId: user.workshopId, contentHash }, { transaction: t })
-  await appendAuditEvent(t, {
-    workshopId: user.workshopId, vehicleId, actorId: user.id, action: 'version.created', entityType: 'version', entityId: version.id,
-    data: {
-      profileId: profile.id, profileName: profile.name, versionNo: version.versionNo, parentVersionId: content.parentVersionId,
-      parentVersionNo: input.parent?.versionNo ?? null, origin: input.origin, contentHash, parameters: input.parameters, rationale: input.rationale,
-      patchFromParent: input.parent ? jsonPatch(input.parent.parameters, input.parameters) : null
-    }
-  })
-  return version
-}
-
 export async function createProfile(user: SignedIn, vehicle: Vehicle, input: ProfileCreate) {
   const parameters = input.parameters ?? defaultParameters(vehicle.platform!)
   const versionId = await useDatabase().transaction(async (t) => {
@@ -50,14 +25,14 @@ export async function createProfile(user: SignedIn, vehicle: Vehicle, input: Pro
     if (clash) throw createError({ statusCode: 409, message: `This car already has a profile called "${input.name}".`, data: { fields: [{ path: 'name', message: 'Already used on this car' }] } })
     const profile = await Profile.create({ workshopId: user.workshopId, vehicleId: vehicle.id, name: input.name }, { transaction: t })
     await appendAuditEvent(t, { workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'profile.created', entityType: 'profile', entityId: profile.id, data: { name: profile.name } })
-    const version = await insertVersion(t, user, profile, vehicle.id, { parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
+    const version = await insertVersion(t, user, { profile, vehicleId: vehicle.id, parameters, rationale: input.rationale, parent: null, origin: 'workshop' })
     return version.id
   }).catch(sameNameRace)
   return readVersion(user, versionId)
 }
 
 // A new draft from any earlier version of the profile (by default the one on the car, else the latest).
-export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate, origin: VersionOrigin = 'workshop') {
+export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate) {
   const profile = await Profile.findOne({ where: { id: profileId, workshopId: user.workshopId } })
   if (!profile) throw createError({ statusCode: 404, message: 'No such profile in this workshop.' })
   const versionId = await useDatabase().transaction(async (t) => {
@@ -68,7 +43,7 @@ export async function createVersion(user: SignedIn, profileId: number, input: Ve
       throw createError({ statusCode: 400, message: 'The version to start from is not a version of this profile.', data: { fields: [{ path: 'fromVersionId', message: 'Not a version of this profile' }] } })
     }
     const parameters = input.parameters ?? parent?.parameters ?? {}
-    const version = await insertVersion(t, user, profile, profile.vehicleId, { parameters, rationale: input.rationale, parent, origin })
+    const version = await insertVersion(t, user, { profile, vehicleId: profile.vehicleId, parameters, rationale: input.rationale, parent, origin: 'workshop' })
     return version.id
   })
   return readVersion(user, versionId)
@@ -78,8 +53,7 @@ export async function createVersion(user: SignedIn, profileId: number, input: Ve
 export async function updateDraft(user: SignedIn, id: number, input: VersionUpdate) {
   await useDatabase().transaction(async (t) => {
     const { version: v, vehicle } = await loadVersion(user, id, t)
-    if (v.authorId !== user.id) throw createError({ statusCode: 403, message: 'Only the author of a draft can change it; start a new version from it instead.' })
-    assertVersionState(v, ['draft'], 'changed')
+    requireTransition(v, 'edit', user)
     if (v.lockVersion !== input.lockVersion) {
       throw createError({
         statusCode: 409,

@@ -1,4 +1,3 @@
-import { QueryTypes } from 'sequelize'
 import type { SignedIn } from '../guards/guards'
 import { PARAMETER_NAMES } from '../../../shared/compute/parameters'
 import { schemaProperties } from '../../../shared/compute/parameter-input'
@@ -7,7 +6,7 @@ import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 import type { VersionState } from '../../../shared/schemas/version'
 import { jsonPatch } from '../../../shared/utils/json-patch'
 import type { ParameterDiffRow, VersionDiff, VersionSide } from '../../../shared/schemas/profile-views'
-import { useDatabase } from '../database/db'
+import { selectRows } from '../database/db'
 import { settingsOf, evaluateOnServer } from '../platforms/evaluation'
 import { figureDiff, warningDiff } from './diff-figures'
 
@@ -19,13 +18,12 @@ interface PairRow {
 // Both versions with their car, drive unit and workshop settings in one plain query (the diff is on the
 // engineer's hot path; nested model includes cost more than the two evaluations).
 async function loadPair(user: SignedIn, aId: number, bId: number) {
-  const rows = await useDatabase().query<PairRow>(
+  const rows = await selectRows<PairRow>(
     `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", v.spec,
             pl.key AS "platformKey", pl.name AS "platformName", pl."motorMaxRpm", pl.schema, w.settings
        FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId" JOIN vehicles v ON v.id = p."vehicleId"
        JOIN platforms pl ON pl.id = v."platformId" JOIN workshops w ON w.id = pv."workshopId"
-      WHERE pv.id IN (:ids) AND pv."workshopId" = :workshopId`,
-    { replacements: { ids: [aId, bId], workshopId: user.workshopId }, type: QueryTypes.SELECT })
+      WHERE pv.id = ANY(:ids::int[]) AND pv."workshopId" = :workshopId`, { ids: [aId, bId], workshopId: user.workshopId })
   const pick = (id: number) => {
     const row = rows.find(r => r.id === id)
     if (!row) throw createError({ statusCode: 404, message: 'No such version in this workshop.' })

@@ -3,6 +3,7 @@ import { Profile, ProfileVersion, Review, User, type Vehicle } from '../../model
 import type { SignedIn } from '../guards/guards'
 import type { EvaluationSnapshot, HistoryEntry, ProfileView, VersionView } from '../../../shared/schemas/profile-views'
 import { useDatabase } from '../database/db'
+import { ACTOR_NAME_SQL } from '../history/recorded-names'
 import { vehicleView } from '../fleet/vehicles'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { reviewView, versionSummary, authorInclude, reviewsInclude, loadVersion } from './views'
@@ -12,7 +13,7 @@ interface EventRow { id: string, action: string, actorId: number | null, actorNa
 // The version's own events from the audit chain: created, edited, submitted, decided, withdrawn.
 async function versionHistory(vehicleId: number, versionId: number): Promise<HistoryEntry[]> {
   const rows = await useDatabase().query<EventRow>(
-    `SELECT e.id, e.action, e."actorId", u.name AS "actorName", e."createdAt", e.data
+    `SELECT e.id, e.action, e."actorId", ${ACTOR_NAME_SQL} AS "actorName", e."createdAt", e.data
        FROM audit_events e LEFT JOIN users u ON u.id = e."actorId"
       WHERE e."vehicleId" = :vehicleId AND e."entityType" = 'version' AND e."entityId" = :versionId ORDER BY e.id`,
     { replacements: { vehicleId, versionId: String(versionId) }, type: QueryTypes.SELECT })

@@ -22,6 +22,7 @@ export async function mailReviewWanted(t: Transaction, author: SignedIn, about: 
   const dangers = dangerCount === 0 ? 'No danger warnings.' : `${dangerCount} danger warning${dangerCount === 1 ? '' : 's'}, each with the author's written justification.`
   await queueMail(t, engineers.map(e => message(author.workshopId, e.email, `Review wanted: ${title(about)}`, [
     `${author.name} has sent version ${about.version.versionNo} of the ${about.profile.name} profile for ${about.vehicle.stockRef} (${about.vehicle.year} ${about.vehicle.make} ${about.vehicle.model}) for review.`,
+    ...(about.version.origin === 'roadside' ? [`The settings were changed at the roadside during road test ${about.version.roadTestId}. Why: ${about.version.rationale}`] : []),
     dangers,
     'Another engineer than the author must approve it before it is road-tested.'
   ], link(about))))

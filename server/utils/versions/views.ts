@@ -2,7 +2,8 @@ import type { Transaction } from 'sequelize'
 import { Platform, Profile, ProfileVersion, Review, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { EvaluationSnapshot, ReviewView, VersionSummary } from '../../../shared/schemas/profile-views'
-import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
+import type { VersionState } from '../../../shared/schemas/version'
+import { failedPeopleRules, personRefusal, stateAfter, stateRefusal, type VersionAction } from '../../../shared/schemas/version-lifecycle'
 
 const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null)
 const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : null)
@@ -22,7 +23,7 @@ export function versionSummary(v: ProfileVersion & { reviews?: Review[] }): Vers
   return {
     id: v.id, profileId: v.profileId, versionNo: v.versionNo, parentVersionId: v.parentVersionId, state: v.state, origin: v.origin,
     author: person(v.author), rationale: v.rationale, dangerCount: dangerCountOf(v.evaluation),
-    submittedAt: iso(v.submittedAt), decidedAt: iso(v.decidedAt), createdAt: iso(v.createdAt)!, lastReview: last ? reviewView(last) : null
+    roadTestId: v.roadTestId ?? null, submittedAt: iso(v.submittedAt), decidedAt: iso(v.decidedAt), createdAt: iso(v.createdAt)!, lastReview: last ? reviewView(last) : null
   }
 }
 
@@ -43,14 +44,14 @@ export async function loadVersion(user: SignedIn, id: number, transaction?: Tran
   return { version, profile: profile!, vehicle, platform: vehicle.platform! }
 }
 
-// 409 naming the state the version is in, for every transition tried from the wrong one.
-export function assertVersionState(v: ProfileVersion, allowed: VersionState[], doing: string) {
+// Checks a change against the version lifecycle's table (docs/version-lifecycle.md): 403 naming the person
+// rule the actor fails, else 409 naming the state the version is in. Answers the state it moves to.
+export function requireTransition(v: ProfileVersion, action: VersionAction, user: SignedIn, driverId?: number): VersionState {
+  const failed = failedPeopleRules(action, { roles: user.roles, isAuthor: v.authorId === user.id, isDriver: driverId === user.id })
+  if (failed.length) throw createError({ statusCode: 403, message: personRefusal(action, failed[0]!) })
   const state = v.state as VersionState
-  if (allowed.includes(state)) return
-  throw createError({
-    statusCode: 409,
-    message: `Version ${v.versionNo} is ${state} (${versionStateLabels[state].toLowerCase()}); it cannot be ${doing}. Only a version that is ${allowed.join(' or ')} can.`,
-    data: { state }
-  })
+  const refusal = stateRefusal(action, state, v.versionNo)
+  if (refusal) throw createError({ statusCode: 409, message: refusal, data: { state } })
+  return stateAfter(action, state)
 }
 
