@@ -7,6 +7,9 @@ export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', 'nuxt-security', '@nuxt/eslint'],
   devtools: { enabled: false },
+  // Links fetch the code of the page they lead to when touched or hovered, not whenever they come into view:
+  // a phone at the roadside downloads only the page it is on.
+  experimental: { defaults: { nuxtLink: { prefetchOn: { visibility: false, interaction: true } } } },
   telemetry: false,
   css: [
     '@fontsource/ibm-plex-sans/400.css',
@@ -52,6 +55,8 @@ export default defineNuxtConfig({
     '/_nuxt/**': { headers: { 'Content-Security-Policy': NON_PAGE_CSP } }
   },
   nitro: {
+    // The tester is often on a phone with little signal: serve gzip and brotli copies of the built assets.
+    compressPublicAssets: { gzip: true, brotli: true },
     // Sequelize loads its dialect by name at run time; pdfkit reads its font data and sharp loads its
     // native binding from their own folders: keep these as real node modules.
     externals: { external: ['sequelize', 'pg', 'pg-hstore', 'pdfkit', 'sharp'] },

@@ -12,6 +12,7 @@ import * as historyForm2 from './20261203-3001-history-form-2'
 import * as kits from './20261203-5001-kits'
 import * as fleetRechecks from './20261203-5002-fleet-rechecks'
 import * as onCarEvaluations from './20261203-5003-on-car-evaluations'
+import * as roadTestIdempotency from './20261203-6001-road-test-idempotency'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -26,5 +27,6 @@ export const migrations = [
   { name: '20261203-3001-history-form-2', ...historyForm2 },
   { name: '20261203-5001-kits', ...kits },
   { name: '20261203-5002-fleet-rechecks', ...fleetRechecks },
-  { name: '20261203-5003-on-car-evaluations', ...onCarEvaluations }
+  { name: '20261203-5003-on-car-evaluations', ...onCarEvaluations },
+  { name: '20261203-6001-road-test-idempotency', ...roadTestIdempotency }
 ]

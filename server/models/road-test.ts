@@ -15,6 +15,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
   declare checks: RoadTestCheck[]
   declare verdict: 'pass' | 'fail'
   declare signed: CreationOptional<RoadTestSignature | null>
+  declare idempotencyKey: CreationOptional<string | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -30,6 +31,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
       checks: { type: DataTypes.JSONB, allowNull: false },
       verdict: { type: DataTypes.TEXT, allowNull: false },
       signed: { type: DataTypes.JSONB, allowNull: true },
+      idempotencyKey: { type: DataTypes.UUID, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE
     }, { sequelize, tableName: 'road_tests' })

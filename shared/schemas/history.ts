@@ -31,6 +31,16 @@ export const facetsQuerySchema = z.object({ vehicleId: z.coerce.number().int().p
 // One changed value, with what it was before when the history can tell (`beforeKnown`).
 export interface ChangeRow { path: string, op: string, before?: unknown, after?: unknown, beforeKnown: boolean }
 
+// Names shown in place of record numbers, looked up as the history is read (a version as "Road v12").
+export interface EventNames {
+  version?: string
+  parentVersion?: string
+  supersededVersion?: string
+  person?: string
+  snag?: string
+  people: Record<string, string>
+}
+
 export interface HistoryEntry {
   id: string
   createdAt: string
@@ -42,6 +52,7 @@ export interface HistoryEntry {
   actor: { id: number, name: string, recorded: boolean } | null
   changes: ChangeRow[]
   details: Record<string, unknown>
+  names: EventNames
   hash: string
   prevHash: string | null
   form: number

@@ -62,7 +62,9 @@ export const roadTestCreateSchema = z.object({
   conditions: conditionsSchema,
   checks: z.array(roadTestCheckSchema).max(12),
   verdict: z.enum(roadTestVerdicts, { error: 'Choose pass or fail' }),
-  testedAt: z.coerce.date().optional()
+  testedAt: z.coerce.date().optional(),
+  // Given by the phone when the record is begun, so a send repeated after a lost answer records it once.
+  idempotencyKey: z.uuid({ error: 'A send key as the phone makes it' }).optional()
 }).strict().superRefine((rt, ctx) => {
   for (const key of mandatoryCheckKeys) {
     const found = rt.checks.filter(c => c.key === key)

@@ -160,3 +160,14 @@ export function eventDetails(data: Record<string, unknown>): Record<string, unkn
   const { patch: _p, before: _b, after: _a, ...rest } = data
   return rest
 }
+
+// A version's creation as rows: drafted from another, the settings that differ from it (with the parent's values
+// where the caller folded them); a first version, every setting it starts with.
+export function creationRows(data: Record<string, unknown>, parentParameters?: Record<string, unknown>): ChangeRow[] {
+  if (isPatch(data.patchFromParent)) {
+    const patch = data.patchFromParent.map(o => ({ ...o, path: `/parameters${o.path}` }))
+    return changeRows({ patch, ...(parentParameters ? { before: { parameters: parentParameters } } : {}) })
+  }
+  if (isObject(data.parameters)) return changeRows({ after: { parameters: data.parameters } })
+  return changeRows(data)
+}

@@ -28,7 +28,10 @@ const snagLabels: Record<string, string> = {
   '/kind': 'Kind', '/title': 'Snag', '/detail': 'Detail', '/status': 'Status', '/blocking': 'Blocks sign-off', '/priority': 'Priority', '/assigneeId': 'Assigned to (person no.)'
 }
 
-const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels, snag: snagLabels }
+const userLabels: Record<string, string> = { '/name': 'Name', '/email': 'E-mail', '/roles': 'Roles', '/active': 'Can sign in' }
+const platformLabels: Record<string, string> = { '/name': 'Name', '/key': 'Short name', '/motorMaxRpm': 'Highest motor speed, rpm' }
+
+const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels, snag: snagLabels, user: userLabels, platform: platformLabels }
 
 export function knownChangeLabel(entityType: string | undefined, path: string): string | undefined {
   return entityType ? byEntity[entityType]?.[path] : undefined

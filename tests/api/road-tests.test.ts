@@ -31,6 +31,24 @@ describe('road tests', async () => {
     expect(list.body.items[0]).toMatchObject({ id: res.body.id, verdict: 'pass', signed: false, failedChecks: [] })
   })
 
+  it('records a send repeated with the same key once, in parallel or one after the other, and only for its version', async () => {
+    const v = await approvedVersion(await newProfile((await newCar(tuner)).id))
+    const key = crypto.randomUUID()
+    const body = { ...roadTestBody(), idempotencyKey: key }
+    const [a, b] = await Promise.all([tester.call('POST', `/api/versions/${v}/road-tests`, body), tester.call('POST', `/api/versions/${v}/road-tests`, body)])
+    expect([a.status, b.status].sort()).toEqual([200, 201])
+    expect(a.body.id).toBe(b.body.id)
+    const again = await tester.call('POST', `/api/versions/${v}/road-tests`, body)
+    expect(again.status).toBe(200)
+    expect(again.body.id).toBe(a.body.id)
+    const rows = await withDatabase(c => c.query('SELECT count(*)::int AS n FROM road_tests WHERE "idempotencyKey" = $1', [key]))
+    expect(rows.rows[0].n).toBe(1)
+    const events = await withDatabase(c => c.query('SELECT count(*)::int AS n FROM audit_events WHERE action = $1 AND "entityId" = $2', ['road-test.recorded', String(a.body.id)]))
+    expect(events.rows[0].n).toBe(1)
+    expect((await tester.call('POST', `/api/versions/${versionId}/road-tests`, body)).status).toBe(409) // the key belongs to another version's record
+    expect((await tester.call('POST', `/api/versions/${v}/road-tests`, { ...roadTestBody(), idempotencyKey: 'not-a-key' })).status).toBe(400)
+  })
+
   it('refuses a version that is not approved, naming its state', async () => {
     const draft = await approvedVersion(profileId, { state: 'in-review' })
     const res = await tester.call('POST', `/api/versions/${draft}/road-tests`, roadTestBody())

@@ -1,7 +1,7 @@
 // Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
-import { HANDOVER_CAUTIONS, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
+import { handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
 import { checkGuides, checkTitles } from '../../../shared/schemas/road-test-checks'
 import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
@@ -49,7 +49,7 @@ async function profileSheet(vehicle: Vehicle, profile: Profile, version: Profile
   const approver = review ? recorded['version.approved'] ?? (review as Review & { reviewer?: User }).reviewer?.name : undefined
   return {
     profileName: profile.name, versionNo: version.versionNo, versionId: version.id, signedOffAt: rt?.signed?.at ?? null,
-    settings: settingLines(version.parameters), figures: figureLines(evaluation, vehicle.spec),
+    settings: settingLines(version.parameters, vehicle.platform!.schema), figures: figureLines(evaluation, vehicle.spec),
     warnings: evaluation.warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message, justification: version.justifications?.[w.rule] ?? null })),
     roadTest: rt ? {
       id: rt.id, testedAt: new Date(rt.testedAt).toISOString(), tester, verdict: rt.verdict,
@@ -82,6 +82,6 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
     carFacts: carFactLines(vehicle.spec, vehicle.platform?.name ?? ''),
     profiles: await Promise.all(onCar.map(p => profileSheet(vehicle, p, versions.find(v => v.id === p.onCarVersionId)!))),
     enhancements: enhancements.map(s => ({ title: s.title, detail: s.detail, priority: snagPriorityLabels[s.priority as SnagPriority] })),
-    cautions: HANDOVER_CAUTIONS
+    cautions: handoverCautions(vehicle.spec.drivenAxle)
   }
 }

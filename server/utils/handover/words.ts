@@ -2,12 +2,31 @@
 import { kphToMph, kwToHp, type Evaluation } from '../../../shared/compute'
 import type { HandoverLine } from '../../../shared/schemas/handover'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
+import { schemaProperties } from '../../../shared/compute/parameter-input'
+import { keyLabel } from '../../../shared/utils/audit-values'
 
 const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: digits })
 const kw = (x: number) => `${n(x, 1)} kW (${n(kwToHp(x))} hp)`
 const kph = (x: number | null) => x === null ? '—' : `${n(x)} km/h (${n(kphToMph(x))} mph)`
 
-export function settingLines(p: Record<string, number>): HandoverLine[] {
+// The settings the owner is told about in words, then every other setting on the car by its drive unit's title.
+const TOLD = new Set(['powerCapKw', 'torqueCapNm', 'speedLimitKph', 'reverseSpeedLimitKph', 'liftOffRegenPct', 'brakeRegenPct', 'regenTorqueLimitNm', 'creepTorqueNm', 'creepSpeedKph',
+  'motorDerateStartC', 'motorCutoffC', 'inverterDerateStartC', 'inverterCutoffC', 'batteryDerateStartC', 'batteryCutoffC', 'batteryDischargeLimitA', 'batteryChargeLimitA'])
+
+function otherLines(p: Record<string, number>, schema: unknown): HandoverLine[] {
+  const props = schemaProperties(schema)
+  return Object.entries(p).filter(([k]) => !TOLD.has(k)).map(([k, v]) => {
+    const prop = props[k] ?? {}
+    const unit = typeof prop.unit === 'string' && prop.unit !== '' ? ` ${prop.unit}` : ''
+    return { label: String(prop.title ?? keyLabel(k)), value: `${n(v, 2)}${unit}`, ...(typeof prop.description === 'string' ? { note: prop.description } : {}) }
+  })
+}
+
+export function settingLines(p: Record<string, number>, schema?: unknown): HandoverLine[] {
+  return [...toldLines(p), ...otherLines(p, schema)]
+}
+
+function toldLines(p: Record<string, number>): HandoverLine[] {
   return [
     { label: 'Most power', value: kw(p.powerCapKw!), note: 'The most the motor will ever deliver.' },
     { label: 'Most torque', value: `${n(p.torqueCapNm)} N·m`, note: 'The pull from standstill; it sets how briskly the car moves off.' },

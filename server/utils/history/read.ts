@@ -1,7 +1,9 @@
 import type { HistoryEntry, HistoryPage, HistoryQuery } from '../../../shared/schemas/history'
-import { changeRows, copyState, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
+import { changeRows, copyState, creationRows, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
 import { selectRows } from '../database/db'
 import { hashedRecord, type RecordedActor } from './audit'
+import { eventNames } from './names'
+import { parentSettings } from './parents'
 
 export interface HistoryScope { workshopId: number, vehicleId?: number }
 
@@ -96,12 +98,13 @@ function actorOf(r: EventRow): HistoryEntry['actor'] {
 }
 
 async function toEntries(workshopId: number, rows: EventRow[], complete: boolean, withRecord: boolean): Promise<HistoryEntry[]> {
-  const folds = await foldedStates(workshopId, rows, complete)
-  return rows.map(r => ({
+  const [folds, names, parents] = await Promise.all([foldedStates(workshopId, rows, complete), eventNames(workshopId, rows), parentSettings(workshopId, rows)])
+  return rows.map((r, i) => ({
     id: String(r.id), createdAt: new Date(r.createdAt).toISOString(), action: r.action, entityType: r.entityType, entityId: r.entityId,
     vehicle: r.vehicleId ? { id: r.vehicleId, stockRef: r.stockRef ?? '' } : null,
     actor: actorOf(r),
-    changes: changeRows(r.data, folds.get(String(r.id))), details: eventDetails(r.data), hash: r.hash, prevHash: r.prevHash, form: r.form,
+    changes: r.action === 'version.created' ? creationRows(r.data, parents.get(String(r.id))) : changeRows(r.data, folds.get(String(r.id))),
+    details: eventDetails(r.data), names: names[i]!, hash: r.hash, prevHash: r.prevHash, form: r.form,
     ...(withRecord ? { record: hashedRecord(r) } : {})
   }))
 }

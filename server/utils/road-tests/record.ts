@@ -42,14 +42,25 @@ export function requireTestedAtInRange(version: ProfileVersion, testedAt: Date, 
 
 export const carLabel = (v: Pick<Vehicle, 'stockRef' | 'year' | 'make' | 'model'>) => `${v.stockRef} ${v.year} ${v.make} ${v.model}`
 
-export async function recordRoadTest(user: SignedIn, versionId: number, input: RoadTestCreate) {
+// The record a send with this key made already, if any: a repeated send answers with it (`repeated`).
+async function alreadySent(user: SignedIn, versionId: number, key: string | undefined) {
+  if (!key) return null
+  const rt = await RoadTest.findOne({ where: { workshopId: user.workshopId, idempotencyKey: key } })
+  if (rt && rt.versionId !== versionId) throw createError({ statusCode: 409, message: 'This send key belongs to a road test of another version.' })
+  return rt
+}
+
+export async function recordRoadTest(user: SignedIn, versionId: number, input: RoadTestCreate): Promise<RoadTestView & { repeated: boolean }> {
+  const earlier = await alreadySent(user, versionId, input.idempotencyKey)
+  if (earlier) return { ...await readRoadTest(user, earlier.id), repeated: true }
   const { version, vehicle } = await findTestedVersion(user, versionId)
   requireTransition(version, 'road-test', user)
   const testedAt = input.testedAt ?? new Date()
   requireTestedAtInRange(version, testedAt)
+  let repeated = false
   const id = await useDatabase().transaction(async (transaction) => {
     const rt = await RoadTest.create({
-      workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id,
+      workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id, idempotencyKey: input.idempotencyKey ?? null,
       testedAt, conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict
     }, { transaction })
     // A car on its first road test has moved on from the workshop floor.
@@ -59,11 +70,17 @@ export async function recordRoadTest(user: SignedIn, versionId: number, input: R
     }
     await appendAuditEvent(transaction, {
       workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'road-test.recorded', entityType: 'road-test', entityId: rt.id,
-      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict })) }
+      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict, values: c.values })) }
     })
     return rt.id
+  }).catch(async (e: Error) => {
+    // Two sends with one key at once: the unique index lets one through; the other answers with its record.
+    const raced = e.name === 'SequelizeUniqueConstraintError' ? await alreadySent(user, versionId, input.idempotencyKey) : null
+    if (!raced) throw e
+    repeated = true
+    return raced.id
   })
-  return readRoadTest(user, id)
+  return { ...await readRoadTest(user, id), repeated }
 }
 
 // A road test of the signed-in person's workshop (staff only); 404 otherwise.

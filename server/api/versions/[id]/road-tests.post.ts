@@ -5,6 +5,7 @@ export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
   const user = await requirePermission(event, routePermission('road-test'))
   const input = await readValidatedBody(event, zodValidator(roadTestCreateSchema))
-  setResponseStatus(event, 201)
-  return recordRoadTest(user, id, input)
+  const { repeated, ...recorded } = await recordRoadTest(user, id, input)
+  setResponseStatus(event, repeated ? 200 : 201)
+  return recorded
 })
