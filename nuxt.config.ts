@@ -1,10 +1,15 @@
 import { fileURLToPath } from 'node:url'
 
+const NON_PAGE_CSP = "default-src 'none'; frame-ancestors 'none'"
+
 // Voltwright: Nuxt 4 app, Nitro server routes, PostgreSQL through Sequelize.
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', 'nuxt-security', '@nuxt/eslint'],
   devtools: { enabled: false },
+  // Links fetch the code of the page they lead to when touched or hovered, not whenever they come into view:
+  // a phone at the roadside downloads only the page it is on.
+  experimental: { defaults: { nuxtLink: { prefetchOn: { visibility: false, interaction: true } } } },
   telemetry: false,
   css: [
     '@fontsource/ibm-plex-sans/400.css',
@@ -29,14 +34,29 @@ export default defineNuxtConfig({
     s3Bucket: 'voltwright',
     s3AccessKeyId: '',
     s3SecretAccessKey: '',
+    s3Region: 'us-east-1',
     smtpHost: '127.0.0.1',
     smtpPort: 1025,
+    smtpTls: 'none',
+    smtpUser: '',
+    smtpPassword: '',
     mailFrom: 'Voltwright <register@voltwright.test>',
+    // Reverse proxies whose X-Forwarded-For names the client for sign-in limits (NUXT_TRUSTED_PROXIES, README).
+    trustedProxies: '',
     // A sign-in lasts a working day: after 12 hours the sealed cookie no longer opens.
     session: { maxAge: 60 * 60 * 12 },
     public: { baseUrl: 'http://localhost:3000' }
   },
+  // Answers that are not pages (JSON, CSV, PDF, files, scripts) run nothing: a policy that allows nothing, rather
+  // than the pages' policy with its nonce placeholder unfilled (docs/security.md).
+  routeRules: {
+    // JSON answers carry no script or style to which a CSP nonce could apply: none is drawn for them.
+    '/api/**': { headers: { 'Content-Security-Policy': NON_PAGE_CSP }, security: { nonce: false } },
+    '/_nuxt/**': { headers: { 'Content-Security-Policy': NON_PAGE_CSP } }
+  },
   nitro: {
+    // The tester is often on a phone with little signal: serve gzip and brotli copies of the built assets.
+    compressPublicAssets: { gzip: true, brotli: true },
     // Sequelize loads its dialect by name at run time; pdfkit reads its font data and sharp loads its
     // native binding from their own folders: keep these as real node modules.
     externals: { external: ['sequelize', 'pg', 'pg-hstore', 'pdfkit', 'sharp'] },

@@ -75,6 +75,7 @@ createServer(async (req, res) => {
     let m: RegExpMatchArray | null
     let out: unknown
     if (url.pathname === '/health') out = { ok: true }
+    else if (url.pathname === '/cpu') { const c = process.cpuUsage(); out = { micros: c.user + c.system } } // for the bench's CPU per answer
     else if (url.pathname === '/vehicles') out = await vehicles(workshopId)
     else if ((m = url.pathname.match(/^\/vehicles\/(\d+)\/history$/))) out = await history(workshopId, Number(m[1]))
     else if ((m = url.pathname.match(/^\/versions\/(\d+)\/diff\/(\d+)$/))) out = await diff(workshopId, Number(m[1]), Number(m[2]))

@@ -44,6 +44,8 @@ try {
   onShutdown(() => stopRestarted(restartedDir))
   // The fault tests stop the mail and object-store stand-ins and start them again (tests/api/services.ts):
   // not fatal here, and what they start is recorded in the data folder and stopped with the rest.
+  // The tests speak as the reverse proxy on this machine, so that X-Forwarded-For can name other clients (tests/api/trust-sign-in.test.ts).
+  process.env.NUXT_TRUSTED_PROXIES ??= '127.0.0.1,::1'
   const { env, pgDir, mailSink, objectStore } = await bringUp(config, { step, fsync: 'off', seedTwice: true, servicesCritical: false })
   const testEnv = {
     ...env,
@@ -55,7 +57,9 @@ try {
     VOLTWRIGHT_PG_PORT: String(config.pgPort),
     VOLTWRIGHT_MAIL_SINK: JSON.stringify({ pid: mailSink.pid, command: mailSink.spawnargs }),
     VOLTWRIGHT_OBJECT_STORE: JSON.stringify({ pid: objectStore.pid, command: objectStore.spawnargs }),
-    VOLTWRIGHT_RESTARTED_DIR: restartedDir
+    VOLTWRIGHT_RESTARTED_DIR: restartedDir,
+    // tests/api/instances.test.ts starts a second server instance from the same build on this port.
+    VOLTWRIGHT_SECOND_PORT: process.env.SECOND_PORT || String(config.port + 1)
   }
   await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api', ...apiFiles], { cwd: root, env: testEnv }) }, 'api')
   await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')

@@ -11,13 +11,14 @@ import { demoProfiles, type DemoProfile, type DemoVersion } from './demo-profile
 const DAY_MS = 86_400_000
 const HOUR_MS = 3_600_000
 
-interface Car { id: number, workshopId: number, spec: VehicleSpec, key: string, name: string, motorMaxRpm: number, schema: unknown, settings: unknown }
+// id: the car's, or null for a kit's baseline (its events belong to no car).
+export interface Car { id: number | null, workshopId: number, spec: VehicleSpec, key: string, name: string, motorMaxRpm: number, schema: unknown, settings: unknown }
 
-async function rows<T extends object>(qi: QueryInterface, t: Transaction, sql: string, replacements: Record<string, unknown> = {}) {
+export async function rows<T extends object>(qi: QueryInterface, t: Transaction, sql: string, replacements: Record<string, unknown> = {}) {
   return qi.sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction: t })
 }
 
-async function addVersion(qi: QueryInterface, t: Transaction, car: Car, people: Record<string, number>, profile: { id: number, name: string }, no: number, parent: { id: number, parameters: Record<string, number> } | null, v: DemoVersion) {
+export async function addVersion(qi: QueryInterface, t: Transaction, car: Car, people: Record<string, number>, profile: { id: number, name: string }, no: number, parent: { id: number, parameters: Record<string, number> } | null, v: DemoVersion) {
   const platform = { key: car.key, name: car.name, motorMaxRpm: car.motorMaxRpm, schema: car.schema }
   const parameters = { ...defaultParameters(platform), ...v.parameters }
   const authorId = people[v.author]!

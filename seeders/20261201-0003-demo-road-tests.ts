@@ -29,7 +29,7 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
       const signedAt = new Date(testedAt.getTime() + 3_600_000)
       const contentHash = sha256Hex(canonicalJson(roadTestRecordContent({ roadTestId: row!.id, vehicleId: v.vehicleId, versionId: v.id, versionContentHash: v.contentHash, testerId: tester, testedAt, conditions: rt.conditions, checks: rt.checks, verdict: 'pass', telemetry: [], files: [], signedAt })))
       await qi.sequelize.query('UPDATE road_tests SET signed = CAST(:signed AS jsonb) WHERE id = :id', { replacements: { id: row!.id, signed: JSON.stringify({ testerId: tester, at: signedAt.toISOString(), contentHash }) }, transaction: t })
-      await appendAuditEvent(t, { workshopId: v.workshopId, vehicleId: v.vehicleId, actorId: tester, action: 'road-test.recorded', entityType: 'road-test', entityId: row!.id, data: { versionId: v.id, verdict: 'pass', conditions: rt.conditions, signed: { contentHash } } })
+      await appendAuditEvent(t, { workshopId: v.workshopId, vehicleId: v.vehicleId, actorId: tester, action: 'road-test.recorded', entityType: 'road-test', entityId: row!.id, data: { versionId: v.id, verdict: 'pass', conditions: rt.conditions, checks: rt.checks.map(c => ({ key: c.key, verdict: c.verdict, values: c.values })), signed: { contentHash } } })
     }
     for (const s of demoSnags) {
       const [car] = await select(qi, t, 'SELECT id, "workshopId" FROM vehicles WHERE "stockRef" = :stockRef', s)

@@ -51,12 +51,12 @@ export const secondWorkshopCar: DemoCar = {
 // Cars on the drive units whose controllers have settings of their own (seeder 20261203-4002).
 export const moreDemoCars: (Omit<DemoCar, 'platformIndex' | 'ownedByClient'> & { platformKey: string })[] = [
   {
-    stockRef: 'OF-107', make: 'Lanvey', model: 'Corrick Tourer', year: 1966, chassisNumber: 'LC66-41820', registration: 'HWD 208D',
+    stockRef: 'OF-110', make: 'Lanvey', model: 'Corrick Tourer', year: 1966, chassisNumber: 'LC66-41820', registration: 'HWD 208D',
     status: 'converting', platformKey: 'quennel-95',
     spec: { kerbMassKg: 1090, frontAxleLoadPct: 54, wheelbaseMm: 2440, cgHeightMm: 510, tyreSize: '175/70 R14 84H', finalDriveRatio: 7.6, drivetrainEfficiency: 0.9, dragCoefficient: 0.43, frontalAreaM2: 1.8, rollingResistanceCoeff: 0.010, drivenAxle: 'rear', originalEnginePowerKw: 62, ...pack, packCapacityKwh: 36 }
   },
   {
-    stockRef: 'OF-108', make: 'Brackley', model: 'Wren Sports', year: 1972, chassisNumber: 'BW72-18733', registration: 'OKV 544K',
+    stockRef: 'OF-111', make: 'Brackley', model: 'Wren Sports', year: 1972, chassisNumber: 'BW72-18733', registration: 'OKV 544K',
     status: 'converting', platformKey: 'peltry-70',
     spec: { kerbMassKg: 880, frontAxleLoadPct: 50, wheelbaseMm: 2210, cgHeightMm: 460, tyreSize: '165/70 R13 79H', finalDriveRatio: 7.0, drivetrainEfficiency: 0.9, dragCoefficient: 0.41, frontalAreaM2: 1.6, rollingResistanceCoeff: 0.010, drivenAxle: 'rear', originalEnginePowerKw: 48, ...pack, packCapacityKwh: 28 }
   }

@@ -59,7 +59,9 @@ export function useFullHistory(vehicleId: number, filters: HistoryFilters, max =
   })
 }
 
-// Runs only when asked: the walk reads every event of the workshop.
-export function useChainVerify() {
-  return useFetch<VerifyResult>('/api/audit/verify', { key: 'audit-verify', immediate: false, server: false })
+// Runs only when asked: the walk reads every event of the workshop. With an earlier head (the "event:hash"
+// line of a head mail), also says whether that event is still in the chain unchanged.
+export function useChainVerify(head: Ref<string>) {
+  const query = computed(() => (head.value.trim() ? { head: head.value.trim() } : {}))
+  return useFetch<VerifyResult>('/api/audit/verify', { key: 'audit-verify', query, immediate: false, server: false, watch: false })
 }

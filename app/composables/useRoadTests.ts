@@ -2,12 +2,15 @@ import type { WorkshopCheck } from '~~/shared/schemas/workshop-checks'
 import type { SettingValues } from '~~/shared/compute/parameter-input'
 import type { RoadTestCreate, RoadsideVersionInput } from '~~/shared/schemas/road-test'
 import type { AwaitingRoadTest, RoadTestChart, RoadTestListItem, RoadTestView } from '~~/shared/schemas/road-test-views'
-import type { Severity } from '~~/shared/compute/types'
+import type { PlatformLike, Severity } from '~~/shared/compute/types'
+import type { VehicleSpec } from '~~/shared/schemas/vehicle-spec'
+import type { VersionView } from '~~/shared/schemas/profile-views'
 
 export interface RoadTestBrief {
   version: { id: number, versionNo: number, state: string, authorId: number, parameters: SettingValues }
   profile: { id: number, name: string }
-  vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null }
+  vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null, spec: VehicleSpec }
+  platform: PlatformLike
   platformSchema: { properties?: Record<string, { title: string, unit: string, minimum: number, maximum: number, multipleOf: number }> } | null
   expected: { maxStartGradePct: number | null, creepHoldGradePct: number | null, liftOffDecelMs2: number | null, brakeRegenDecelMs2: number | null, topSpeedKph: number | null, zeroTo50S: number | null, regenGripLimitMs2: { dry: number | null, wet: number | null, snow: number | null }, derateStartC?: { motor: number | null, inverter: number | null, battery: number | null } }
   warnings: { rule: string, severity: Severity, message: string }[]
@@ -42,8 +45,9 @@ export function useRoadTest(id: MaybeRefOrGetter<number>) {
     return result
   }
   async function recordRoadside(input: RoadsideVersionInput) {
-    const created = await $fetch<{ id: number, versionNo: number }>(`/api/road-tests/${toValue(id)}/roadside-version`, { method: 'POST', body: input })
-    await record.refresh()
+    const created = await $fetch<VersionView>(`/api/road-tests/${toValue(id)}/roadside-version`, { method: 'POST', body: input })
+    // The answer is the new version, already in review: the engineers' list and the car's profiles now hold it.
+    await Promise.all([record.refresh(), carChanged(created.vehicle!.id, cacheKeys.profiles(created.vehicle!.id), cacheKeys.reviews)])
     return created
   }
   return { record, chart, refreshAll, signOff, recordRoadside }

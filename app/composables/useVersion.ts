@@ -9,7 +9,9 @@ export function useVersion(id: MaybeRefOrGetter<number>) {
   // A write answers the version as it now is: shown as it is, and the lists that hold it read again.
   async function took(v: VersionView) {
     data.data.value = v
-    await carChanged(v.vehicle.id, cacheKeys.profiles(v.vehicle.id), cacheKeys.reviews, cacheKeys.drafts, cacheKeys.awaitingRoadTests)
+    // A kit's baseline version has no car: its kit's page and the worklists are what hold it.
+    if (v.vehicle) await carChanged(v.vehicle.id, cacheKeys.profiles(v.vehicle.id), cacheKeys.reviews, cacheKeys.drafts, cacheKeys.awaitingRoadTests)
+    else await refreshNuxtData([cacheKeys.reviews, cacheKeys.drafts, `kit-${v.kit?.id}`])
     return v
   }
   const act = async (path: string, body: Record<string, unknown> = {}) => took(await $fetch<VersionView>(`/api/versions/${toValue(id)}/${path}`, { method: 'POST', body }))
@@ -25,6 +27,8 @@ export function useVersion(id: MaybeRefOrGetter<number>) {
 
   return {
     ...data,
+    // Awaited by a page that needs the version in its setup (the server renders the draft's settings).
+    ready: Promise.resolve(data).then(() => undefined),
     save,
     startFrom,
     submit: (justifications: Record<string, string>) => act('submit', { justifications }),

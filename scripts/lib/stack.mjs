@@ -30,7 +30,7 @@ export async function bringUp(config, options = {}) {
   const mailSink = startMailSink(config, { critical })
   const objectStore = startObjectStore(config, { critical })
   await step('build', ensureBuild)
-  startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
+  const server = startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
   await waitForHttp(`${config.baseUrl}/api/health`)
-  return { env, pgDir, mailSink, objectStore }
+  return { env, pgDir, mailSink, objectStore, server }
 }

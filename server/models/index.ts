@@ -16,10 +16,11 @@ import { Attachment } from './attachment'
 import { TelemetryLog } from './telemetry-log'
 import { Readback } from './readback'
 import { WorkshopCheck } from './workshop-check'
+import { Kit } from './kit'
 
-export { Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, WorkshopCheck }
+export { Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, WorkshopCheck, Kit }
 
-const all = [Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, WorkshopCheck]
+const all = [Workshop, User, Platform, Vehicle, LoginAttempt, RevokedSession, Profile, ProfileVersion, Review, MailMessage, RoadTest, Snag, Attachment, TelemetryLog, Readback, WorkshopCheck, Kit]
 
 export function initModels(sequelize: Sequelize) {
   for (const model of all) model.initModel(sequelize)
@@ -40,6 +41,8 @@ export function initModels(sequelize: Sequelize) {
   RoadTest.hasMany(TelemetryLog, { foreignKey: 'roadTestId', as: 'telemetry' })
   Snag.belongsTo(User, { foreignKey: 'assigneeId', as: 'assignee' })
   Snag.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' })
+  Kit.belongsTo(Platform, { foreignKey: 'platformId', as: 'platform' })
+  Profile.belongsTo(Kit, { foreignKey: 'kitId', as: 'kit' })
   Readback.belongsTo(User, { foreignKey: 'recordedById', as: 'recordedBy' })
   Readback.belongsTo(Profile, { foreignKey: 'profileId', as: 'profile' })
   Readback.belongsTo(ProfileVersion, { foreignKey: 'versionId', as: 'version' })

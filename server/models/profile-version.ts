@@ -10,6 +10,7 @@ export class ProfileVersion extends Model<InferAttributes<ProfileVersion>, Infer
   declare profileId: number
   declare versionNo: number
   declare parentVersionId: number | null
+  declare baselineVersionId: CreationOptional<number | null>
   declare parameters: SettingValues
   declare rationale: CreationOptional<string>
   declare authorId: number
@@ -34,6 +35,7 @@ export class ProfileVersion extends Model<InferAttributes<ProfileVersion>, Infer
       profileId: { type: DataTypes.INTEGER, allowNull: false },
       versionNo: { type: DataTypes.INTEGER, allowNull: false },
       parentVersionId: { type: DataTypes.INTEGER, allowNull: true },
+      baselineVersionId: { type: DataTypes.INTEGER, allowNull: true },
       parameters: { type: DataTypes.JSONB, allowNull: false },
       rationale: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
       authorId: { type: DataTypes.INTEGER, allowNull: false },

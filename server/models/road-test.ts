@@ -17,6 +17,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
   declare checkList: CreationOptional<RecordedCheck[]> // the workshop's own checks as they stood when recorded
   declare verdict: 'pass' | 'fail'
   declare signed: CreationOptional<RoadTestSignature | null>
+  declare idempotencyKey: CreationOptional<string | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -33,6 +34,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
       checkList: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       verdict: { type: DataTypes.TEXT, allowNull: false },
       signed: { type: DataTypes.JSONB, allowNull: true },
+      idempotencyKey: { type: DataTypes.UUID, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE
     }, { sequelize, tableName: 'road_tests' })

@@ -9,6 +9,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string
   declare roles: Role[]
   declare active: CreationOptional<boolean>
+  declare sessionEpoch: CreationOptional<number>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -21,6 +22,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
       passwordHash: { type: DataTypes.TEXT, allowNull: false },
       roles: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false },
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+      // Raised on a password change or deactivation, ending every session signed in before (docs/security.md).
+      sessionEpoch: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE
     }, { sequelize, tableName: 'users', defaultScope: { attributes: { exclude: ['passwordHash'] } }, scopes: { withPassword: {} } })

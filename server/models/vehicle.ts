@@ -17,6 +17,7 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
   declare status: CreationOptional<VehicleStatus>
   declare spec: VehicleSpec
   declare platformId: number
+  declare kitId: CreationOptional<number | null>
   declare driftedAt: CreationOptional<Date | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
@@ -37,6 +38,7 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
       status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'intake' },
       spec: { type: DataTypes.JSONB, allowNull: false },
       platformId: { type: DataTypes.INTEGER, allowNull: false },
+      kitId: { type: DataTypes.INTEGER, allowNull: true },
       driftedAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE

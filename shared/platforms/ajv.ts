@@ -3,6 +3,7 @@ import Ajv2020, { type ErrorObject, type ValidateFunction } from 'ajv/dist/2020.
 import type { PlatformLike } from '../compute/types'
 import { JSON_SCHEMA_2020_12 } from './define'
 import { settingsProblems } from './schema-checks'
+import { describeRefusal, refusedKeywords, type RefusedKeyword } from './keywords'
 
 // Strict mode rejects unknown keywords, so Voltwright's own (unit, roles, choice labels, rising curves) are declared.
 export function createAjv(): Ajv2020 {
@@ -25,8 +26,10 @@ function hash(text: string): string {
   return (h >>> 0).toString(16)
 }
 
-// A validator for a platform's parameters, compiled once per platform key and schema.
-export function compileParameterValidator(platform: PlatformLike): ValidateFunction {
+// A validator for a platform's parameters, compiled once per platform key and schema; none for a schema
+// stored before the keyword allow-list that it now refuses (ajv never compiles a user's regular expression).
+export function compileParameterValidator(platform: PlatformLike): ValidateFunction | null {
+  if (refusedKeywords(platform.schema).length) return null
   const key = `${platform.key}:${hash(JSON.stringify(platform.schema))}`
   let validate = validators.get(key)
   if (!validate) {
@@ -42,13 +45,16 @@ export function describeAjvErrors(errors: ErrorObject[] | null | undefined): str
   return (errors ?? []).map(e => `${e.instancePath || '(top level)'} ${e.message ?? 'is not valid'}`.trim())
 }
 
-export interface SchemaCheck { ok: boolean, errors: string[] }
+export interface SchemaCheck { ok: boolean, errors: string[], refused?: RefusedKeyword[] }
 
-// Against the 2020-12 meta-schema, then Voltwright's own needs (./schema-checks); finally a strict compile.
+// First the keyword allow-list (./keywords), so nothing else ever sees a refused keyword; then the 2020-12
+// meta-schema, then Voltwright's own needs (./schema-checks); finally a strict compile.
 // Each problem starts with its JSON pointer into the schema.
 export function validatePlatformSchema(schema: unknown, facts: { torqueConstantNmPerA?: unknown } = {}): SchemaCheck {
   const errors: string[] = []
   if (schema === null || typeof schema !== 'object' || Array.isArray(schema)) return { ok: false, errors: ['The schema must be a JSON object'] }
+  const refused = refusedKeywords(schema)
+  if (refused.length) return { ok: false, errors: refused.map(describeRefusal), refused }
   const s = schema as Record<string, unknown>
   if (s.$schema !== JSON_SCHEMA_2020_12) errors.push(`/$schema: must be "${JSON_SCHEMA_2020_12}"`)
   // Against the 2020-12 meta-schema whatever $schema says, so a wrong draft still gets a clear answer.
@@ -79,6 +85,7 @@ export function validatePlatform(platform: unknown): SchemaCheck {
   if (typeof p.motorMaxRpm !== 'number' || !Number.isFinite(p.motorMaxRpm) || p.motorMaxRpm <= 0) errors.push('motorMaxRpm must be a number of rpm above 0')
   const k = p.torqueConstantNmPerA
   if (k !== undefined && k !== null && !(typeof k === 'number' && Number.isFinite(k) && k > 0)) errors.push('torqueConstantNmPerA must be a number of N·m per A above 0')
-  errors.push(...validatePlatformSchema(p.schema, { torqueConstantNmPerA: k }).errors)
-  return { ok: errors.length === 0, errors }
+  const schemaCheck = validatePlatformSchema(p.schema, { torqueConstantNmPerA: k })
+  errors.push(...schemaCheck.errors)
+  return { ok: errors.length === 0, errors, ...(schemaCheck.refused ? { refused: schemaCheck.refused } : {}) }
 }

@@ -31,6 +31,17 @@ export interface HandoverSheet {
   cautions: string[]
 }
 
+// Which wheels regen brakes, in the owner's words, by the car's driven axle.
+const regenAxle: Record<'front' | 'rear' | 'all', string> = {
+  front: 'On this front-driven car it brakes the front wheels alone: on wet, icy or loose roads, lift off gently, allow more distance, and expect the steering to feel lighter as it slows.',
+  rear: 'On this rear-driven car it brakes the rear wheels alone, which can make the back of the car step out: on wet, icy or loose roads, lift off gently and allow more distance.',
+  all: 'On this car it brakes all four wheels through the drive: on wet, icy or loose roads, lift off gently and allow more distance.'
+}
+
+export function handoverCautions(drivenAxle: 'front' | 'rear' | 'all'): string[] {
+  return HANDOVER_CAUTIONS.map(c => c.startsWith('Regenerative braking') ? `Regenerative braking slows the car when you lift off the accelerator. ${regenAxle[drivenAxle]}` : c)
+}
+
 export const HANDOVER_CAUTIONS = [
   'These controller settings were proposed, reviewed by a senior engineer who did not write them, and proved on a road test on the date shown. They suit this car as it was when tested: a change of tyres, brakes, suspension, battery or load can make them unsuitable.',
   'Regenerative braking slows the car when you lift off the accelerator. On a rear-driven car it brakes the rear wheels alone: on wet, icy or loose roads, lift off gently and allow more distance.',

@@ -3,6 +3,7 @@ import type { SettingValues } from '../compute/parameter-input'
 import type { Curves, Evaluation, EvaluationError, Figures, NullReasons, PlatformLike, Warning } from '../compute/types'
 import type { VersionOrigin, VersionState } from './version'
 import type { VehicleView } from './vehicle'
+import type { VehicleSpec } from './vehicle-spec'
 
 export interface PersonRef { id: number, name: string }
 
@@ -23,6 +24,8 @@ export interface VersionSummary {
   parentVersionId: number | null
   state: VersionState
   origin: VersionOrigin
+  // The road test a roadside version was recorded on.
+  roadTestId: number | null
   author: PersonRef | null
   rationale: string
   dangerCount: number | null
@@ -40,6 +43,19 @@ export interface ProfileView {
   name: string
   onCarVersionId: number | null
   versions: VersionSummary[]
+  baseline: ProfileBaseline | null
+}
+
+// A car profile built from a kit: the baseline version it stands on, the settings where the car differs from
+// it, and the kit's newer approved baseline when there is one (the baseline moved).
+export interface ProfileBaseline {
+  kitId: number
+  kitName: string
+  versionId: number
+  versionNo: number
+  currentVersionId: number
+  differs: string[]
+  moved: { versionId: number, versionNo: number } | null
 }
 
 export interface HistoryEntry { id: string, action: string, actor: PersonRef | null, createdAt: string, data: Record<string, unknown> }
@@ -52,7 +68,9 @@ export interface VersionView extends Omit<VersionSummary, 'lastReview'> {
   lockVersion: number
   onCar: boolean
   profile: { id: number, name: string, onCarVersionId: number | null }
-  vehicle: VehicleView
+  vehicle: VehicleView | null
+  kit: { id: number, name: string, specTemplate: VehicleSpec } | null
+  baselineVersionId: number | null
   platform: PlatformLike
   parent: { id: number, versionNo: number } | null
   reviews: ReviewView[]
@@ -97,8 +115,8 @@ export interface VersionSide {
 }
 
 export interface VersionDiff {
-  a: { id: number, versionNo: number, profileName: string, state: VersionState, vehicleId: number }
-  b: { id: number, versionNo: number, profileName: string, state: VersionState, vehicleId: number }
+  a: { id: number, versionNo: number, profileName: string, state: VersionState, vehicleId: number | null, kitId: number | null }
+  b: { id: number, versionNo: number, profileName: string, state: VersionState, vehicleId: number | null, kitId: number | null }
   rows: ParameterDiffRow[]
   figures: FigureDiffRow[]
   warnings: WarningDiff
@@ -106,11 +124,20 @@ export interface VersionDiff {
   evaluations: { a: VersionSide, b: VersionSide }
 }
 
+export interface WorkItemCar { id: number, stockRef: string, make: string, model: string, year: number }
+
+// How a work item names what its version is for: a car, or a kit's baseline.
+export function workItemTitle(i: { vehicle: WorkItemCar | null, kit: { name: string } | null, profileName: string, versionNo: number }): string {
+  const of = i.vehicle ? `${i.vehicle.stockRef} ${i.vehicle.make} ${i.vehicle.model}` : `Kit ${i.kit?.name ?? ''}`
+  return `${of} — ${i.profileName} v${i.versionNo}`
+}
+
 export interface ReviewWorkItem {
   versionId: number
   versionNo: number
   profileName: string
-  vehicle: { id: number, stockRef: string, make: string, model: string, year: number }
+  vehicle: WorkItemCar | null
+  kit: { id: number, name: string } | null
   author: PersonRef | null
   submittedAt: string | null
   dangerCount: number
@@ -123,7 +150,8 @@ export interface DraftWorkItem {
   versionNo: number
   profileName: string
   state: VersionState
-  vehicle: { id: number, stockRef: string, make: string, model: string, year: number }
+  vehicle: WorkItemCar | null
+  kit: { id: number, name: string } | null
   updatedAt: string
   review: ReviewView | null
 }

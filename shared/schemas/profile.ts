@@ -32,9 +32,10 @@ export const versionUpdateSchema = z.object({
 }).strict()
 export type VersionUpdate = z.output<typeof versionUpdateSchema>
 
-export const submitSchema = z.object({
-  justifications: z.partialRecord(z.enum(RULE_IDS, { error: 'Not a safety rule' }), z.string().trim().max(2000, 'At most 2000 characters')).default({})
-}).strict()
+// A written reason per safety rule that warns of danger, rule by rule (docs/version-lifecycle.md).
+export const justificationsSchema = z.partialRecord(z.enum(RULE_IDS, { error: 'Not a safety rule' }), z.string().trim().max(2000, 'At most 2000 characters')).default({})
+
+export const submitSchema = z.object({ justifications: justificationsSchema }).strict()
 export type SubmitInput = z.output<typeof submitSchema>
 
 export const approveSchema = z.object({ comment: z.string().trim().max(2000, 'At most 2000 characters').default('') }).strict()

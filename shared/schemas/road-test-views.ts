@@ -3,6 +3,7 @@ import type { CheckVerdict } from './road-test'
 import type { RecordedCheck } from './workshop-checks'
 import type { TelemetrySummary } from '../telemetry/summary'
 import type { TelemetrySeries } from '../telemetry/downsample'
+import type { VersionState } from './version'
 
 // A mandatory check by its CheckKey, or one of the workshop's own by the key in the road test's checkList.
 export interface CheckView { key: string, verdict: CheckVerdict, values: Record<string, number | string | null>, note: string }
@@ -12,7 +13,7 @@ export interface TelemetryView { id: number, attachment: AttachmentView, summary
 export interface RoadTestView {
   id: number
   vehicleId: number
-  version: { id: number, versionNo: number, state: string, profileId: number, profileName: string, authorId: number, contentHash: string }
+  version: { id: number, versionNo: number, state: VersionState, profileId: number, profileName: string, authorId: number, contentHash: string }
   vehicle: { id: number, stockRef: string, make: string, model: string, year: number, status: string }
   tester: { id: number, name: string }
   testedAt: string

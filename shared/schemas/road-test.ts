@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { parametersSchema } from './profile'
+import { justificationsSchema, parametersSchema } from './profile'
 
 // A road test (docs/architecture.md#road-test): conditions, one verdict per mandatory check with its measured values.
 export const surfaces = ['dry', 'wet', 'snow'] as const
@@ -74,7 +74,9 @@ export const roadTestCreateSchema = z.object({
   conditions: conditionsSchema,
   checks: z.array(z.union([roadTestCheckSchema, extraCheckResultSchema], { error: 'Not a check of this road test' })).max(72),
   verdict: z.enum(roadTestVerdicts, { error: 'Choose pass or fail' }),
-  testedAt: z.coerce.date().optional()
+  testedAt: z.coerce.date().optional(),
+  // Given by the phone when the record is begun, so a send repeated after a lost answer records it once.
+  idempotencyKey: z.uuid({ error: 'A send key as the phone makes it' }).optional()
 }).strict().superRefine((rt, ctx) => {
   for (const key of mandatoryCheckKeys) {
     const found = rt.checks.filter(c => c.key === key)
@@ -98,8 +100,10 @@ export const roadTestCreateSchema = z.object({
 })
 export type RoadTestCreate = z.output<typeof roadTestCreateSchema>
 
+// A roadside change is sent for review at once, so it carries the submit's justifications.
 export const roadsideVersionSchema = z.object({
   parameters: parametersSchema,
-  rationale: z.string().trim().min(1, 'Say what you changed at the roadside and why').max(4000)
+  rationale: z.string().trim().min(1, 'Say what you changed at the roadside and why').max(4000),
+  justifications: justificationsSchema
 }).strict()
 export type RoadsideVersionInput = z.output<typeof roadsideVersionSchema>

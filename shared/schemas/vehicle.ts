@@ -34,6 +34,20 @@ export const vehicleCreateSchema = z.object({
   ownerUserId: vehicleFields.ownerUserId.default(null),
   status: vehicleFields.status.default('intake')
 }).strict()
+// Booking in from a kit: the drive unit is the kit's and the spec its template, with any facts given here
+// laid over it (checked whole once merged).
+export const vehicleFromKitSchema = z.object({
+  ...vehicleFields,
+  kitId: z.number().int().positive().max(2147483647),
+  chassisNumber: vehicleFields.chassisNumber.default(''),
+  registration: vehicleFields.registration.default(''),
+  ownerUserId: vehicleFields.ownerUserId.default(null),
+  status: vehicleFields.status.default('intake'),
+  profileName: z.string().trim().min(1, 'A name is needed').max(40, 'At most 40 characters').default('Road'),
+  spec: z.record(z.string().max(40), z.unknown()).refine(s => Object.keys(s).length <= 40, 'Too many fields').default({})
+}).omit({ platformKey: true }).strict()
+export type VehicleFromKit = z.output<typeof vehicleFromKitSchema>
+
 export const vehicleUpdateSchema = z.object(vehicleFields).partial().strict()
 
 export type VehicleCreate = z.output<typeof vehicleCreateSchema>
@@ -64,6 +78,7 @@ export interface VehicleView {
   ownerUserId: number | null
   owner: { id: number, name: string } | null
   platform: { key: string, name: string } | null
+  kitId: number | null
   driftedAt: Date | string | null
   createdAt: Date | string
   updatedAt: Date | string

@@ -7,6 +7,10 @@ declare module '#auth-utils' {
     name: string
     roles: ('admin' | 'tuner' | 'engineer' | 'tester' | 'auditor' | 'client')[]
   }
+  // Kept in the cookie but never sent to the page: the person's session epoch at sign-in.
+  interface SecureSessionData {
+    sessionEpoch: number
+  }
 }
 
 export {}

@@ -1,16 +1,27 @@
 import { knownChangeLabel } from './change-labels'
+import { decodePointer } from './audit-changes'
+import { unitOf, wordsOf } from './audit-values'
 
 // Plain words for the actions the history records; an action not listed here is shown as written.
 export const auditActionLabels: Record<string, string> = {
   'vehicle.created': 'Car booked in',
   'vehicle.updated': 'Car\'s facts changed',
   'vehicle.drift-cleared': 'Drift cleared',
+  'kit.created': 'Kit created',
+  'kit.updated': 'Kit changed',
+  'fleet.rechecked': 'Re-checked with the fleet',
   'user.created': 'Person added',
   'user.updated': 'Person changed',
+  'user.renamed': 'Person renamed',
+  'user.roles-changed': 'Person\'s roles changed',
+  'user.deactivated': 'Person deactivated',
+  'user.reactivated': 'Person reactivated',
+  'user.password-changed': 'Person\'s password changed',
   'profile.created': 'Profile created',
   'version.created': 'Version drafted',
   'version.updated': 'Draft edited',
   'version.edited': 'Draft edited',
+  // Roadside versions recorded before they went through the one insert and submit (docs/version-lifecycle.md).
   'version.roadside-recorded': 'Recorded at the roadside',
   'version.submitted': 'Sent for review',
   'version.withdrawn': 'Withdrawn from review',
@@ -30,61 +41,24 @@ export const auditActionLabels: Record<string, string> = {
   'readback.differs': 'Read-back differs: drift',
   'platform.created': 'Drive unit added',
   'workshop-check.created': 'Road-test check added',
-  'workshop-check.changed': 'Road-test check changed'
+  'workshop-check.changed': 'Road-test check changed',
+  'road-test.photo-added': 'Photo added to a road test',
+  'snag.photo-added': 'Photo added to a snag'
 }
 
 export function auditActionLabel(action: string): string {
-  return auditActionLabels[action] ?? action
+  return auditActionLabels[action] ?? action.split('.').map(wordsOf).join(': ')
 }
 
 // Field names as the history shows them: the workshop's words where the field has them (by the kind of
-// record changed), else the path's own names ("/spec/newThing" → "spec › newThing").
+// record changed), else the path's own names in words ("/spec/newThing" → "Spec › new thing").
 export function changePathLabel(path: string, entityType?: string): string {
-  return knownChangeLabel(entityType, path) ?? (path.replace(/^\//, '').split('/').map(s => s.replace(/~1/g, '/').replace(/~0/g, '~')).join(' › ') || '(whole record)')
+  const known = knownChangeLabel(entityType, path)
+  if (known) return known
+  const parts = decodePointer(path)
+  if (!parts.length) return '(whole record)'
+  const unit = unitOf(parts.at(-1)!)?.unit
+  const text = `${parts.map(wordsOf).join(' › ')}${unit ? `, ${unit}` : ''}`
+  return `${text[0]!.toUpperCase()}${text.slice(1)}`
 }
 
-const isPoint = (v: unknown): v is { x: number, y: number } =>
-  v !== null && typeof v === 'object' && typeof (v as { x?: unknown }).x === 'number' && typeof (v as { y?: unknown }).y === 'number' && Object.keys(v).length === 2
-
-export function changeValueText(value: unknown): string {
-  if (value === undefined) return '—'
-  if (value === null) return 'none'
-  if (Array.isArray(value) && value.every(v => typeof v !== 'object')) return value.join(', ') || '(empty)'
-  if (Array.isArray(value) && value.every(isPoint)) return value.map(p => `${p.x} → ${p.y}`).join(', ') || '(no points)'
-  if (isPoint(value)) return `${value.x} → ${value.y}`
-  if (typeof value === 'object') return JSON.stringify(value)
-  return String(value)
-}
-
-const detailLabels: Record<string, string> = {
-  source: 'Came in as', matches: 'Matches the car\'s profile', profile: 'Profile', versionNo: 'Version', readAt: 'Read from the controller at',
-  controller: 'Controller', differences: 'Differences', reason: 'Reason', verdict: 'Verdict', roadTestId: 'Road test no.', versionId: 'Version id',
-  profileId: 'Profile id', passwordChanged: 'Password changed', comment: 'Comment', reviewId: 'Review no.', contentHash: 'Content hash',
-  warnings: 'Warnings', dangerCount: 'Danger warnings', justifications: 'Justifications', parameters: 'Settings', rationale: 'Rationale',
-  profileName: 'Profile', parentVersionId: 'Drafted from version id', parentVersionNo: 'Drafted from version', patchFromParent: 'Changed from that version',
-  origin: 'Made', name: 'Name', make: 'Make', model: 'Model', status: 'Stage', stockRef: 'Stock ref', lockVersion: 'Save no.',
-  supersededVersionId: 'Replaced version id', fileName: 'File', sizeBytes: 'Size (bytes)', sha256: 'SHA-256'
-}
-
-export function detailLabel(key: string): string {
-  return detailLabels[key] ?? key
-}
-
-const isWarning = (x: unknown): x is { rule: string, severity: string } => typeof x === 'object' && x !== null && typeof (x as { rule?: unknown }).rule === 'string'
-const isPatchOp = (x: unknown): x is { op: string, path: string, value?: unknown } => typeof x === 'object' && x !== null && typeof (x as { op?: unknown }).op === 'string' && typeof (x as { path?: unknown }).path === 'string'
-
-// A detail as words: read-back differences as "parameter: signed off → found", yes/no for true/false.
-export function detailText(key: string, value: unknown): string {
-  if (key === 'differences' && Array.isArray(value)) {
-    return value.map((d: { parameter?: string, expected?: unknown, found?: unknown }) => `${d.parameter}: ${changeValueText(d.expected ?? null)} signed off → ${changeValueText(d.found ?? null)} found`).join('; ') || 'none'
-  }
-  if (Array.isArray(value) && value.length && value.every(isWarning)) return value.map(w => `${w.rule} (${w.severity})`).join(', ')
-  if (Array.isArray(value) && value.length && value.every(isPatchOp)) {
-    return value.map(o => o.op === 'remove' ? `${changePathLabel(o.path)} removed` : `${changePathLabel(o.path)} → ${changeValueText(o.value)}`).join(', ')
-  }
-  if (typeof value === 'boolean') return value ? 'yes' : 'no'
-  if (value && typeof value === 'object' && !Array.isArray(value)) {
-    return Object.entries(value).map(([k, v]) => `${k} ${changeValueText(v)}`).join(', ') || '—'
-  }
-  return changeValueText(value)
-}

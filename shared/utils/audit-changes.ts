@@ -14,11 +14,14 @@ export function isPatch(x: unknown): x is PatchOp[] {
   return Array.isArray(x) && x.every(o => isObject(o) && typeof o.op === 'string' && typeof o.path === 'string')
 }
 
-// RFC 6901: "/a~1b/c~0d" → ["a/b", "c~d"].
+// RFC 6901: "/a~1b/c~0d" → ["a/b", "c~d"]. (The history folds many of these: the usual path has no "~".)
 export function decodePointer(path: string): string[] {
   if (path === '') return []
-  return path.slice(1).split('/').map(s => s.replace(/~1/g, '/').replace(/~0/g, '~'))
+  const keys = path.slice(1).split('/')
+  return path.includes('~') ? keys.map(s => s.replace(/~1/g, '/').replace(/~0/g, '~')) : keys
 }
+
+const encodeKey = (k: string) => (k.includes('~') || k.includes('/') ? k.replace(/~/g, '~0').replace(/\//g, '~1') : k)
 
 export function pointerGet(doc: unknown, path: string): { found: boolean, value?: unknown } {
   let at: unknown = doc
@@ -80,11 +83,22 @@ function removeAt(root: unknown, keys: string[]): unknown {
   return root
 }
 
-// Every leaf of a snapshot as a pointer and its value; arrays count as one value.
+// Every leaf of a snapshot as a pointer and its value; arrays count as one value, an empty object as one leaf.
 export function flattenLeaves(value: unknown, prefix = ''): { path: string, value: unknown }[] {
   if (!isObject(value)) return [{ path: prefix, value }]
-  const rows = Object.entries(value).flatMap(([k, v]) => flattenLeaves(v, `${prefix}/${k.replace(/~/g, '~0').replace(/\//g, '~1')}`))
+  const rows: { path: string, value: unknown }[] = []
+  collectLeaves(value, prefix, rows)
   return rows.length || !prefix ? rows : [{ path: prefix, value }]
+}
+
+function collectLeaves(value: Record<string, unknown>, prefix: string, rows: { path: string, value: unknown }[]) {
+  for (const k of Object.keys(value)) {
+    const path = `${prefix}/${encodeKey(k)}`
+    const v = value[k]
+    const before = rows.length
+    if (isObject(v)) collectLeaves(v, path, rows)
+    if (rows.length === before) rows.push({ path, value: v })
+  }
 }
 
 function beforeOf(path: string, op: string, tests: Map<string, unknown>, snapshot: unknown, fold?: KnownState): Pick<ChangeRow, 'before' | 'beforeKnown'> {
@@ -145,4 +159,15 @@ export const copyState = (s: KnownState): KnownState => ({ known: s.known, state
 export function eventDetails(data: Record<string, unknown>): Record<string, unknown> {
   const { patch: _p, before: _b, after: _a, ...rest } = data
   return rest
+}
+
+// A version's creation as rows: drafted from another, the settings that differ from it (with the parent's values
+// where the caller folded them); a first version, every setting it starts with.
+export function creationRows(data: Record<string, unknown>, parentParameters?: Record<string, unknown>): ChangeRow[] {
+  if (isPatch(data.patchFromParent)) {
+    const patch = data.patchFromParent.map(o => ({ ...o, path: `/parameters${o.path}` }))
+    return changeRows({ patch, ...(parentParameters ? { before: { parameters: parentParameters } } : {}) })
+  }
+  if (isObject(data.parameters)) return changeRows({ after: { parameters: data.parameters } })
+  return changeRows(data)
 }

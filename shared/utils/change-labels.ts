@@ -29,7 +29,10 @@ const snagLabels: Record<string, string> = {
   '/kind': 'Kind', '/title': 'Snag', '/detail': 'Detail', '/status': 'Status', '/blocking': 'Blocks sign-off', '/priority': 'Priority', '/assigneeId': 'Assigned to (person no.)'
 }
 
-const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels, snag: snagLabels }
+const userLabels: Record<string, string> = { '/name': 'Name', '/email': 'E-mail', '/roles': 'Roles', '/active': 'Can sign in' }
+const platformLabels: Record<string, string> = { '/name': 'Name', '/key': 'Short name', '/motorMaxRpm': 'Highest motor speed, rpm' }
+
+const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels, snag: snagLabels, user: userLabels, platform: platformLabels }
 
 // A curve's point of a version's setting: "/parameters/throttleMap/2/y" is "Throttle map, point 3, torque".
 const curveProps = Object.fromEntries(platforms.flatMap(p => Object.entries(schemaProperties(p.schema))).filter(([, p]) => p.type === 'array'))

@@ -16,6 +16,7 @@ export const permissions = {
   'readbacks.record': ['tuner', 'tester'],
   'snags.write': ['admin', 'tuner', 'engineer', 'tester'],
   'activity.read': ['auditor', 'admin', 'engineer'],
+  'fleet.recheck': ['admin', 'engineer'],
   'history.verify': ['auditor', 'admin']
 } as const satisfies Record<string, readonly Role[]>
 

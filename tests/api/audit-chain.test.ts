@@ -105,12 +105,20 @@ describe('the audit chain', async () => {
     await behindTheTriggersBack('UPDATE audit_events SET data = $2 WHERE id = $1', [third.id, JSON.stringify(third.data)])
     expect((await bayAuditor.call('GET', '/api/audit/verify')).body).toMatchObject({ ok: true, checked: 5 })
 
+    // Who acted is hashed too (form 2): a rewritten name or a form set back to 1 is found at that event.
+    for (const forgery of [`actor = jsonb_set(actor, '{name}', '"Someone Else"')`, 'form = 1']) {
+      await behindTheTriggersBack(`UPDATE audit_events SET ${forgery} WHERE id = $1`, [third.id])
+      expect((await bayAuditor.call('GET', '/api/audit/verify')).body, forgery).toMatchObject({ ok: false, checked: 2, firstBroken: { id: String(third.id), problem: 'content' } })
+      await behindTheTriggersBack('UPDATE audit_events SET actor = $2, form = $3 WHERE id = $1', [third.id, JSON.stringify(third.actor), third.form])
+    }
+    expect((await bayAuditor.call('GET', '/api/audit/verify')).body).toMatchObject({ ok: true, checked: 5 })
+
     const fourth = rows[3]
     await behindTheTriggersBack('DELETE FROM audit_events WHERE id = $1', [fourth.id])
     const removed = (await bayAuditor.call('GET', '/api/audit/verify')).body
     expect(removed).toMatchObject({ ok: false, checked: 3, firstBroken: { id: String(rows[4].id), problem: 'link' } })
-    await withDatabase(c => c.query(`INSERT INTO audit_events (id, "workshopId", "vehicleId", "actorId", action, "entityType", "entityId", data, "createdAt", "prevHash", hash)
-      VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11)`, [fourth.id, fourth.workshopId, fourth.vehicleId, fourth.actorId, fourth.action, fourth.entityType, fourth.entityId, JSON.stringify(fourth.data), fourth.createdAt, fourth.prevHash, fourth.hash]), true)
+    await withDatabase(c => c.query(`INSERT INTO audit_events (id, form, "workshopId", "vehicleId", "actorId", actor, action, "entityType", "entityId", data, "createdAt", "prevHash", hash)
+      VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13)`, [fourth.id, fourth.form, fourth.workshopId, fourth.vehicleId, fourth.actorId, JSON.stringify(fourth.actor), fourth.action, fourth.entityType, fourth.entityId, JSON.stringify(fourth.data), fourth.createdAt, fourth.prevHash, fourth.hash]), true)
     expect((await bayAuditor.call('GET', '/api/audit/verify')).body).toMatchObject({ ok: true, checked: 5 })
 
     expect((await auditor.call('GET', '/api/audit/verify')).body.ok).toBe(true)

@@ -60,16 +60,19 @@ describe('POST /api/evaluate', async () => {
     expect(res.body.figures.zeroTo50S).toBeGreaterThan(0)
   })
 
-  it('reports an inverted derate band, a missing, a non-numeric and an unknown setting', async () => {
+  it('reports an inverted derate band, a missing and a non-numeric setting; refuses an unknown one outright', async () => {
     const { batteryChargeLimitA: _gone, ...missingOne } = defaults
     const res = await tuner.call('POST', '/api/evaluate', {
       vehicleId: car101.id, platformKey: 'fenlow-45',
-      parameters: { ...missingOne, motorDerateStartC: 150, motorCutoffC: 140, creepTorqueNm: 'lots', boostMode: 1 }
+      parameters: { ...missingOne, motorDerateStartC: 150, motorCutoffC: 140, creepTorqueNm: 'lots' }
     })
     expect(res.status).toBe(200)
     expect(res.body.valid).toBe(false)
     const p = paths(res.body.errors)
-    for (const path of ['parameters.motorDerateStartC', 'parameters.batteryChargeLimitA', 'parameters.creepTorqueNm', 'parameters.boostMode']) expect(p).toContain(path)
+    for (const path of ['parameters.motorDerateStartC', 'parameters.batteryChargeLimitA', 'parameters.creepTorqueNm']) expect(p).toContain(path)
+    const unknown = await tuner.call('POST', '/api/evaluate', { vehicleId: car101.id, platformKey: 'fenlow-45', parameters: { ...defaults, boostMode: 1 } })
+    expect(unknown.status).toBe(400)
+    expect(paths(unknown.body.data.fields)).toEqual(['parameters.boostMode'])
     expect(res.body.errors.find((e: { path: string }) => e.path === 'parameters.motorDerateStartC').message).toMatch(/below/)
     expect(new Set(p).size).toBe(p.length) // ajv's findings are not reported twice
     expect(res.body.figures.testMassKg).toBe(1055)
@@ -126,7 +129,8 @@ describe('POST /api/evaluate', async () => {
       expect(res.status, JSON.stringify(body).slice(0, 200)).toBeLessThan(500)
       expect([200, 400, 404, 413, 415]).toContain(res.status)
     }
-    // Any JSON at all as the settings, or as the whole body (fast-check): a 200 or a 400, never a crash.
+    // Any JSON at all as the settings, or as the whole body (fast-check): a 200 or a 400, never a crash. Settings
+    // that are all the drive unit's own, each a plain value, are evaluated; another name or a nested value is refused.
     await fc.assert(fc.asyncProperty(
       fc.dictionary(fc.constantFrom(...Object.keys(defaults), 'other'), fc.jsonValue({ maxDepth: 2 })), fc.jsonValue({ maxDepth: 3 }),
       async (parameters, anyBody) => {
@@ -135,9 +139,12 @@ describe('POST /api/evaluate', async () => {
         if (/"__proto__":/.test(JSON.stringify(parameters))) {
           expect(a.status).toBe(400)
           expect(a.body.message).toMatch(/JSON/)
-        } else {
+        } else if (Object.entries(parameters).every(([k, v]) => k !== 'other' && (v === null || typeof v !== 'object'))) {
           expect(a.status).toBe(200)
           expect(Array.isArray(a.body.errors)).toBe(true)
+        } else {
+          expect(a.status).toBe(400)
+          expect(a.body.data.fields[0].path).toMatch(/^parameters\./)
         }
         const b = await tuner.call('POST', '/api/evaluate', JSON.stringify(anyBody))
         expect(b.status).toBeLessThan(500)

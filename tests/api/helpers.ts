@@ -16,13 +16,15 @@ export interface Caller {
   call: <T = any>(method: string, path: string, body?: unknown, headers?: Record<string, string>) => Promise<Answer<T>>
 }
 
-async function send<T>(method: string, path: string, body: unknown, headers: Record<string, string>): Promise<Answer<T>> {
-  const res = await testFetch(path, {
+// To the server npm test started, or to another one at `base` (a second instance, tests/api/second-instance.ts).
+async function send<T>(method: string, path: string, body: unknown, headers: Record<string, string>, base?: string): Promise<Answer<T>> {
+  const init: RequestInit = {
     method,
-    headers: { 'content-type': 'application/json', 'origin': baseUrl, ...headers },
+    headers: { 'content-type': 'application/json', 'origin': base ?? baseUrl, ...headers },
     body: body === undefined ? undefined : typeof body === 'string' ? body : JSON.stringify(body),
     redirect: 'manual'
-  })
+  }
+  const res = base ? await fetch(`${base}${path}`, init) : await testFetch(path, init)
   const text = await res.text()
   let parsed: unknown = text
   try { parsed = text ? JSON.parse(text) : null } catch { /* not JSON */ }
@@ -36,6 +38,11 @@ export async function signIn(email: string, password = DEMO_PASSWORD): Promise<C
   if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${JSON.stringify(res.body)}`)
   const cookie = (res.headers.getSetCookie?.() ?? []).map(c => c.split(';')[0]).join('; ')
   return { cookie, call: (m, p, b, h = {}) => send(m, p, b, { cookie, ...h }) }
+}
+
+// The same signed-in person (the same cookie) calling the server at `base`.
+export function callerAt(base: string, cookie: string): Caller {
+  return { cookie, call: (m, p, b, h = {}) => send(m, p, b, { cookie, ...h }, base) }
 }
 
 // Direct SQL for checks the API cannot show (as the application's own role, or as the superuser).

@@ -78,7 +78,7 @@ describe('a car\'s history', async () => {
     const rows = parse(text, { bom: true, columns: true }) as Record<string, string>[]
     expect(rows).toHaveLength(2)
     expect(rows.map(r => r.action)).toEqual(['vehicle.updated', 'vehicle.updated'])
-    expect(rows[1]!['changes (before → after)']).toContain('Kerb mass (converted), kg: 1050 → 1075')
+    expect(rows[1]!['changes (before → after)']).toContain('Kerb mass (converted), kg: 1,050 → 1,075')
     expect(rows[0]!.by).toBe('Maud Ellery')
     expect(rows[0]!.hash).toMatch(/^[0-9a-f]{64}$/)
   })

@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, withDatabase } from './helpers'
 import { approvedVersion, newCar, newProfile, passingChecks, recordRoadTest, roadTestBody } from './road-test-fixtures'
+import { allJustified } from './version-fixtures'
 
 await useRunningServer()
 
@@ -30,12 +31,49 @@ describe('road tests', async () => {
     expect(list.body.items[0]).toMatchObject({ id: res.body.id, verdict: 'pass', signed: false, failedChecks: [] })
   })
 
+  it('records a send repeated with the same key once, in parallel or one after the other, and only for its version', async () => {
+    const v = await approvedVersion(await newProfile((await newCar(tuner)).id))
+    const key = crypto.randomUUID()
+    const body = { ...roadTestBody(), idempotencyKey: key }
+    const [a, b] = await Promise.all([tester.call('POST', `/api/versions/${v}/road-tests`, body), tester.call('POST', `/api/versions/${v}/road-tests`, body)])
+    expect([a.status, b.status].sort()).toEqual([200, 201])
+    expect(a.body.id).toBe(b.body.id)
+    const again = await tester.call('POST', `/api/versions/${v}/road-tests`, body)
+    expect(again.status).toBe(200)
+    expect(again.body.id).toBe(a.body.id)
+    const rows = await withDatabase(c => c.query('SELECT count(*)::int AS n FROM road_tests WHERE "idempotencyKey" = $1', [key]))
+    expect(rows.rows[0].n).toBe(1)
+    const events = await withDatabase(c => c.query('SELECT count(*)::int AS n FROM audit_events WHERE action = $1 AND "entityId" = $2', ['road-test.recorded', String(a.body.id)]))
+    expect(events.rows[0].n).toBe(1)
+    expect((await tester.call('POST', `/api/versions/${versionId}/road-tests`, body)).status).toBe(409) // the key belongs to another version's record
+    expect((await tester.call('POST', `/api/versions/${v}/road-tests`, { ...roadTestBody(), idempotencyKey: 'not-a-key' })).status).toBe(400)
+  })
+
   it('refuses a version that is not approved, naming its state', async () => {
     const draft = await approvedVersion(profileId, { state: 'in-review' })
     const res = await tester.call('POST', `/api/versions/${draft}/road-tests`, roadTestBody())
     expect(res.status).toBe(409)
     expect(res.body.message).toContain('in-review')
     expect(res.body.data.state).toBe('in-review')
+  })
+
+  it('takes a road test dated between the version\'s approval and now, and refuses any other date with a plain message', async () => {
+    const approvedAt = new Date((await tester.call('GET', `/api/versions/${versionId}`)).body.decidedAt)
+    const early = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: new Date(approvedAt.getTime() - 60_000).toISOString() })
+    expect(early.status).toBe(400)
+    expect(early.body.message).toContain('before version')
+    expect(early.body.data.fields[0].path).toBe('testedAt')
+    const future = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: new Date(Date.now() + 60 * 60_000).toISOString() })
+    expect(future.status).toBe(400)
+    expect(future.body.message).toContain('in the future')
+    const years = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: '1999-06-01T10:00:00Z' })
+    expect(years.status).toBe(400)
+    const between = new Date(Math.min(approvedAt.getTime() + 1000, Date.now()))
+    const ok = await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: between.toISOString() })
+    expect(ok.status).toBe(201)
+    expect(ok.body.testedAt).toBe(between.toISOString())
+    // A phone's clock a minute ahead of the server's is let through.
+    expect((await tester.call('POST', `/api/versions/${versionId}/road-tests`, { ...roadTestBody(), testedAt: new Date(Date.now() + 60_000).toISOString() })).status).toBe(201)
   })
 
   it('names each missing or wrong part of the record', async () => {
@@ -83,7 +121,7 @@ describe('roadside changes', async () => {
   const tested = await withDatabase(async c => (await c.query('SELECT parameters FROM profile_versions WHERE id = $1', [versionId])).rows[0].parameters)
 
   it('records the change as the next version, from the roadside, in review, and mails the engineers', async () => {
-    const res = await tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, liftOffRegenPct: tested.liftOffRegenPct - 5 }, rationale: 'Lift-off felt abrupt on the wet bend' })
+    const res = await tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, liftOffRegenPct: tested.liftOffRegenPct - 5 }, rationale: 'Lift-off felt abrupt on the wet bend', justifications: allJustified() })
     expect(res.status).toBe(201)
     expect(res.body).toMatchObject({ versionNo: 2, parentVersionId: versionId, state: 'in-review', origin: 'roadside', roadTestId, profileId })
     expect(res.body.contentHash).toMatch(/^[0-9a-f]{64}$/)
@@ -94,7 +132,7 @@ describe('roadside changes', async () => {
   })
 
   it('numbers parallel roadside changes without gaps or duplicates', async () => {
-    const answers = await Promise.all([1, 2, 3].map(i => tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, creepTorqueNm: tested.creepTorqueNm - i }, rationale: `Creep try ${i}` })))
+    const answers = await Promise.all([1, 2, 3].map(i => tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: { ...tested, creepTorqueNm: tested.creepTorqueNm - i }, rationale: `Creep try ${i}`, justifications: allJustified() })))
     expect(answers.map(a => a.status)).toEqual([201, 201, 201])
     expect(answers.map(a => a.body.versionNo).sort()).toEqual([3, 4, 5])
   })

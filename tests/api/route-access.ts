@@ -9,7 +9,7 @@ import { multipart, upload } from './road-test-fixtures'
 // Demo things looked up at the start of the test; each `[param]` of a route names the one it is called with.
 // signedOff: a signed-off version by tuner@ (so withdrawing it is refused for its state); sibling: another version of its profile;
 // roadTest: a signed road test (so sign-off and uploads are refused for its state).
-export type Fixture = 'car' | 'profile' | 'signedOff' | 'sibling' | 'roadTest' | 'snag' | 'user' | 'platform' | 'attachment' | 'check'
+export type Fixture = 'car' | 'profile' | 'signedOff' | 'sibling' | 'roadTest' | 'snag' | 'user' | 'platform' | 'attachment' | 'check' | 'kit'
 
 export interface Access {
   roles: readonly Role[]
@@ -38,15 +38,26 @@ export const routeAccess: Record<string, Access> = {
   'audit/events.get.ts': { roles: ['auditor', 'admin', 'engineer'], foreign: 'allowed' },
   'audit/facets.get.ts': { roles: ['auditor', 'admin', 'engineer'], foreign: 'allowed' },
   'audit/verify.get.ts': { roles: ['auditor', 'admin'], foreign: 'allowed' },
+  'audit/head-mail.post.ts': { roles: ['auditor', 'admin'], foreign: 'allowed' },
   'auth/login.post.ts': { roles: all, anonymous: true, foreign: 'allowed' },
   'auth/logout.post.ts': { roles: all, anonymous: true, foreign: 'allowed' },
   'auth/me.get.ts': { roles: all, foreign: 'allowed' },
   'drift/index.get.ts': { roles: staff, foreign: 'allowed' },
   'evaluate.post.ts': { roles: all, foreign: 'allowed' },
+  'fleet/recheck.get.ts': { roles: staff, foreign: 'allowed' },
+  'fleet/recheck.post.ts': { roles: ['admin', 'engineer'], foreign: 'allowed' },
+  'fleet/search.csv.post.ts': { roles: staff, foreign: 'allowed' },
+  'fleet/search.post.ts': { roles: staff, foreign: 'allowed' },
   'health.get.ts': { roles: all, anonymous: true, foreign: 'allowed' },
+  'kits/[id].get.ts': { roles: staff, foreign: 404, params: { id: 'kit' } },
+  'kits/[id].patch.ts': { roles: ['admin', 'tuner', 'engineer'], foreign: 404, params: { id: 'kit' }, foreignBody: {} },
+  'kits/index.get.ts': { roles: staff, foreign: 'allowed' },
+  'kits/index.post.ts': { roles: ['admin', 'tuner', 'engineer'], foreign: 'allowed' },
   'platforms/[key].get.ts': { roles: all, foreign: 'allowed', params: { key: 'platform' } },
   'platforms/index.get.ts': { roles: all, foreign: 'allowed' },
   'platforms/index.post.ts': { roles: ['admin'], foreign: 'allowed' },
+  'profiles/[id]/rebase.get.ts': { roles: staff, foreign: 404, params: { id: 'profile' } },
+  'profiles/[id]/rebase.post.ts': { roles: ['tuner'], foreign: 403, params: { id: 'profile' } },
   'profiles/[id]/versions.post.ts': { roles: ['tuner'], foreign: 403, params: { id: 'profile' } },
   'road-tests/[id].get.ts': { roles: staff, foreign: 404, params: roadTest },
   'road-tests/[id]/chart.get.ts': { roles: staff, foreign: 404, params: roadTest },
@@ -121,6 +132,7 @@ export async function demoFixtures(): Promise<Record<Fixture, string> & { otherC
       user: String(tuner!.id),
       platform: 'fenlow-45',
       check: 'heater-demister',
+      kit: await one('SELECT id FROM kits WHERE "workshopId" = $1 ORDER BY id LIMIT 1', [ws]),
       attachment: await photoOfThrowawaySnag()
     }
   })

@@ -7,7 +7,7 @@ import { approvedVersion, newCar, newProfile } from '../api/road-test-fixtures'
 // One running server per file: both parts share it.
 describe('any controller, and the workshop\'s own checks', async () => {
   await useRunningServer()
-  const carId = await withDatabase(async c => (await c.query(`SELECT id FROM vehicles WHERE "stockRef" = 'OF-107'`)).rows[0].id as number)
+  const carId = await withDatabase(async c => (await c.query(`SELECT id FROM vehicles WHERE "stockRef" = 'OF-110'`)).rows[0].id as number)
   const { context, page } = await launch()
   afterAll(() => context.close())
 

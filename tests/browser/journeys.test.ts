@@ -42,6 +42,7 @@ describe('a car from the tuner\'s first draft to the owner\'s handover sheet', a
     await tuner.getByRole('link', { name: car.stockRef, exact: true }).click()
     await expect.poll(() => heading(tuner)).toBe('1967 Testwick Journey Coupé')
     await step(tuner, 'tuner-car')
+    await tuner.getByRole('navigation', { name: 'The car\'s pages' }).getByRole('link', { name: 'Settings and versions' }).click()
     await tuner.getByLabel(/New profile's name/).fill(profile)
     await tuner.getByRole('button', { name: 'Start a new profile' }).click()
     await tuner.waitForURL(/\/versions\/\d+$/)
@@ -136,18 +137,20 @@ describe('a car from the tuner\'s first draft to the owner\'s handover sheet', a
     await signInThroughPage(auditor, 'auditor@voltwright.test')
     await findCar(auditor, car.stockRef)
     await auditor.getByRole('link', { name: car.stockRef, exact: true }).click()
+    await auditor.getByRole('navigation', { name: 'The car\'s pages' }).getByRole('link', { name: 'History' }).click()
     await auditor.getByRole('link', { name: 'Print view' }).click()
     await expect.poll(() => heading(auditor)).toBe(`History of ${car.stockRef} · 1967 Testwick Journey Coupé`)
-    // Each entry opens with what happened and who did it; the page lists the newest first.
-    const entries = auditor.getByRole('main').getByRole('listitem')
+    // Each entry opens with a sentence of what happened and who did it; the page lists the newest first.
+    const entries = auditor.getByRole('main').locator('ol > li')
     await expect.poll(() => entries.count()).toBe(14)
-    const story = await entries.evaluateAll(items => items.map(li => [...li.querySelector('p')!.children].slice(0, 2).map(c => c.textContent!.trim()).join(' ')).reverse())
-    expect(story).toEqual([
-      'Car booked in by Dev Carrow', 'Profile created by Dev Carrow', 'Version drafted by Dev Carrow', 'Draft edited by Dev Carrow',
-      'Sent for review by Dev Carrow', 'Sent back by Maud Ellery', 'Version drafted by Dev Carrow', 'Draft edited by Dev Carrow',
-      'Sent for review by Dev Carrow', 'Approved by Maud Ellery', 'Stage changed by Sol Brannagh', 'Road test recorded by Sol Brannagh',
-      'Controller log uploaded by Sol Brannagh', 'Signed off onto the car by Sol Brannagh'
-    ])
+    const story = await entries.evaluateAll(items => items.map(li => li.querySelector('[data-sentence]')!.textContent!.trim()).reverse())
+    const expected = [
+      `Dev Carrow booked in 1967 Testwick Journey Coupé as ${car.stockRef}.`, `Dev Carrow started the profile ${profile}.`, `Dev Carrow drafted ${profile} v1.`, `Dev Carrow edited the draft ${profile} v1.`,
+      `Dev Carrow sent ${profile} v1 for review with`, `Maud Ellery sent ${profile} v1 back to its author.`, `Dev Carrow drafted ${profile} v2 from ${profile} v1.`, `Dev Carrow edited the draft ${profile} v2.`,
+      `Dev Carrow sent ${profile} v2 for review`, `Maud Ellery approved ${profile} v2.`, 'Sol Brannagh moved the car from ', `Sol Brannagh recorded a road test of ${profile} v2: passed.`,
+      `Sol Brannagh uploaded the controller log quarry-lane.csv for the road test of ${profile} v2.`, `Sol Brannagh signed ${profile} v2 off onto the car; the car moved from road testing to`
+    ]
+    expect(story.map((s, i) => s.startsWith(expected[i]!) ? expected[i] : s)).toEqual(expected)
     expect(await entries.filter({ hasText: 'version.rejected' }).textContent()).toContain(comment)
     expect(await entries.filter({ hasText: 'quarry-lane.csv' }).textContent()).toContain('road-test.telemetry-uploaded')
     await step(auditor, 'auditor-car-history')

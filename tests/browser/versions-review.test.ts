@@ -17,6 +17,7 @@ describe('a tuner proposes, an engineer reviews', async () => {
     await signInThroughPage(page, 'tuner@voltwright.test')
     await page.goto(`${baseUrl}/cars`, { waitUntil: 'networkidle' })
     await page.getByRole('link', { name: 'OF-102' }).click()
+    await page.getByRole('navigation', { name: 'The car\'s pages' }).getByRole('link', { name: 'Settings and versions' }).click()
     await page.getByLabel(/New profile's name/).fill(profileName)
     await page.getByRole('button', { name: 'Start a new profile' }).click()
     await page.waitForURL(/\/versions\/\d+$/)

@@ -51,10 +51,10 @@ describe('an admin sets the workshop\'s safety thresholds', async () => {
     expect(await page.locator('[data-unsaved-count]').textContent()).toBe('Everything shown is saved')
 
     await page.getByRole('link', { name: 'Activity', exact: true }).last().click()
-    const event = page.locator('li', { hasText: 'Workshop settings changed' }).first()
+    const event = page.locator('li', { hasText: 'changed the workshop\'s settings' }).first()
     await expect.poll(() => event.textContent()).toContain('Juno Hatherley')
     expect(await event.locator('tr', { hasText: 'Snow friction' }).textContent()).toMatch(/0\.2\s*→\s*0\.15/)
-    expect(await event.locator('tr', { hasText: 'Minimum creep-hold gradient' }).textContent()).toMatch(/5\s*→\s*8/)
+    expect(await event.locator('tr', { hasText: 'Minimum creep-hold gradient' }).textContent()).toMatch(/5 %\s*→\s*8 %/)
   })
 
   it('refuses out-of-range values by name, and shows the server\'s word when another admin saved meanwhile', async () => {

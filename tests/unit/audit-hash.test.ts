@@ -1,7 +1,9 @@
 import { createHash } from 'node:crypto'
 import { describe, it, expect } from 'vitest'
 import fc from 'fast-check'
-import { auditHash, auditHashBody, sha256Hex } from '../../server/utils/history/audit'
+// An RFC 8785 implementation from the npm registry, to check ours against (docs/history.md).
+import canonicalize from 'canonicalize'
+import { auditHash, auditHashBody, eventHash, hashedRecord, sha256Hex } from '../../server/utils/history/audit'
 import { canonicalJson } from '../../shared/utils/canonical-json'
 
 const event = {
@@ -59,5 +61,65 @@ describe('the hashed body', () => {
       const { prevHash: _p, ...covered } = e
       expect(auditHashBody(e)).toBe(reference({ ...covered, createdAt: new Date(e.createdAt).toISOString() }))
     }), { numRuns: 300 })
+  })
+})
+
+const formTwo = { ...event, form: 2, actor: { name: 'Dev Carrow', email: 'tuner@voltwright.test' }, prevHash: 'cd'.repeat(32) }
+
+describe('form 2 (docs/history.md)', () => {
+  it('hashes the RFC 8785 form of one record holding the previous hash and who acted, as named then', () => {
+    const record = hashedRecord(formTwo)
+    expect(record).toEqual({
+      form: 2, prevHash: 'cd'.repeat(32), workshopId: 1, vehicleId: 7, actor: { id: 3, name: 'Dev Carrow', email: 'tuner@voltwright.test' },
+      action: 'vehicle.updated', entityType: 'vehicle', entityId: '7', data: event.data, createdAt: '2026-12-01T09:30:00.000Z'
+    })
+    expect(canonicalize(record)).toBe('{"action":"vehicle.updated","actor":{"email":"tuner@voltwright.test","id":3,"name":"Dev Carrow"},"createdAt":"2026-12-01T09:30:00.000Z",'
+      + '"data":{"patch":[{"op":"replace","path":"/status","value":"converting"}]},"entityId":"7","entityType":"vehicle","form":2,"prevHash":"' + 'cd'.repeat(32) + '","vehicleId":7,"workshopId":1}')
+    expect(eventHash(formTwo)).toBe(createHash('sha256').update(canonicalize(record)!, 'utf8').digest('hex'))
+  })
+
+  it('gives the worked examples of docs/history.md', () => {
+    // Hashes computed with Node's crypto straight from the texts shown in docs/history.md.
+    expect(eventHash(formTwo)).toBe('b16ee0a38e7dc823502d63f59120a841e142254b9c3a088f546faab57f4261c2')
+    expect(eventHash({ ...formTwo, form: 1 })).toBe('8087aa1e7baadc339b6c01aca5fded185eb42ca3f7dcbef4ee54dc421a2b05d2')
+  })
+
+  it('changes with the recorded name, the link and the form', () => {
+    const base = eventHash(formTwo)
+    expect(eventHash({ ...formTwo, actor: { ...formTwo.actor, name: 'Someone Else' } })).not.toBe(base)
+    expect(eventHash({ ...formTwo, prevHash: null })).not.toBe(base)
+    expect(eventHash({ ...formTwo, form: 1 })).toBe(auditHash(formTwo.prevHash, formTwo))
+  })
+
+  it('form 1\'s record, with the previous hash in front, gives form 1\'s hash', () => {
+    const one = { ...formTwo, form: 1 }
+    const record = hashedRecord(one)
+    expect(Object.keys(record)).toEqual(['action', 'actorId', 'createdAt', 'data', 'entityId', 'entityType', 'vehicleId', 'workshopId'])
+    expect(createHash('sha256').update(one.prevHash + canonicalize(record), 'utf8').digest('hex')).toBe(eventHash(one))
+  })
+
+  it('our canonical JSON is RFC 8785 for any JSON value (checked against the canonicalize package)', () => {
+    fc.assert(fc.property(fc.jsonValue(), (v) => { expect(canonicalJson(v)).toBe(canonicalize(v)) }), { numRuns: 1000 })
+    for (const n of [1e21, 1e-7, 0.1 + 0.2, -0, 5e-324, 2 ** 53 + 2, 123456789012345680000]) expect(canonicalJson({ n })).toBe(canonicalize({ n }))
+  })
+})
+
+// Real events: the demo seed's 50, written in form 1 by the register before form 2 (commit f90fd11) and read back
+// from its database on 3 December 2026 (tests/unit/fixtures/form-1-demo-events.json).
+describe('form 1, as docs/history.md describes it, on real demo events', async () => {
+  const { default: events } = await import('./fixtures/form-1-demo-events.json') as { default: (Parameters<typeof eventHash>[0] & { id: string, hash: string })[] }
+
+  it('recomputes every hash and link from the eight documented members, with an independent RFC 8785 implementation', () => {
+    expect(events).toHaveLength(50)
+    const prev = new Map<number, string | null>()
+    for (const e of events) {
+      expect(e.prevHash, e.id).toBe(prev.get(e.workshopId) ?? null)
+      const record = { action: e.action, actorId: e.actorId, createdAt: e.createdAt, data: e.data, entityId: e.entityId, entityType: e.entityType, vehicleId: e.vehicleId, workshopId: e.workshopId }
+      expect(createHash('sha256').update((e.prevHash ?? '') + canonicalize(record), 'utf8').digest('hex'), `event ${e.id} ${e.action}`).toBe(e.hash)
+      expect(eventHash(e)).toBe(e.hash)
+      expect(hashedRecord(e)).toEqual(record)
+      prev.set(e.workshopId, e.hash)
+    }
+    expect(new Set(events.map(e => e.action)).size).toBeGreaterThan(10)
   })
 })

@@ -14,7 +14,7 @@ export default defineEventHandler(async (event) => {
   const { body, contentLength } = await getObjectStream(thumb ? a.thumbnailKey! : a.objectKey)
   setResponseHeaders(event, {
     'content-type': thumb ? 'image/jpeg' : a.contentType,
-    'content-disposition': `${a.contentType.startsWith('image/') ? 'inline' : 'attachment'}; filename="${a.filename.replace(/[^\w.-]/g, '_')}"`,
+    'content-disposition': contentDisposition(a.contentType.startsWith('image/') ? 'inline' : 'attachment', a.filename),
     'cache-control': 'private, max-age=3600',
     'x-content-type-options': 'nosniff',
     ...(contentLength ? { 'content-length': contentLength } : {})

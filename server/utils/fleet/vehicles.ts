@@ -1,9 +1,8 @@
-import { QueryTypes } from 'sequelize'
 import { Platform, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { VehicleCreate, VehicleListQuery, VehicleUpdate, VehicleView } from '../../../shared/schemas/vehicle'
 import { jsonPatch } from '../../../shared/utils/json-patch'
-import { useDatabase } from '../database/db'
+import { selectRows, useDatabase } from '../database/db'
 import { vehicleScopeSql } from '../guards/guards'
 import { appendAuditEvent } from '../history/audit'
 import { findWorkshopPlatform } from '../platforms/platforms'
@@ -14,12 +13,13 @@ export function vehicleView(v: Vehicle): VehicleView {
     chassisNumber: v.chassisNumber, registration: v.registration, status: v.status, spec: v.spec,
     ownerUserId: v.ownerUserId, owner: v.owner ? { id: v.owner.id, name: v.owner.name } : null,
     platform: v.platform ? { key: v.platform.key, name: v.platform.name } : null,
+    kitId: v.kitId ?? null,
     driftedAt: v.driftedAt ?? null,
     createdAt: v.createdAt, updatedAt: v.updatedAt
   }
 }
 
-const include = [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
+export const vehicleInclude = [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }]
 
 // One plain query for the page and its count (the list is the busiest read): of the drive unit only what the
 // list shows, not its schema. Sort fields come from the schema's own list, so they are safe to name in SQL.
@@ -31,11 +31,10 @@ export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
     where.push(`(${['make', 'model', '"stockRef"', 'registration'].map(f => `v.${f} ILIKE :like`).join(' OR ')})`)
     replacements.like = `%${q.q.replace(/[\\%_]/g, m => `\\${m}`)}%`
   }
-  const rows = await useDatabase().query<ListRow>(
+  const rows = await selectRows<ListRow>(
     `SELECT v.*, pl.key AS "platformKey", pl.name AS "platformName", o.name AS "ownerName", count(*) OVER () AS total
        FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" LEFT JOIN users o ON o.id = v."ownerUserId"
-      WHERE ${where.join(' AND ')} ORDER BY v."${q.sort}" ${q.dir === 'desc' ? 'DESC' : 'ASC'}, v.id ASC LIMIT :limit OFFSET :offset`,
-    { replacements, type: QueryTypes.SELECT })
+      WHERE ${where.join(' AND ')} ORDER BY v."${q.sort}" ${q.dir === 'desc' ? 'DESC' : 'ASC'}, v.id ASC LIMIT :limit OFFSET :offset`, replacements)
   const total = rows.length ? Number(rows[0]!.total) : q.page === 1 ? 0 : await countVehicles(where.join(' AND '), replacements)
   const items = rows.map(r => vehicleView({
     ...r, platform: r.platformKey ? { key: r.platformKey, name: r.platformName } : undefined,
@@ -48,7 +47,7 @@ type ListRow = Vehicle & { platformKey: string | null, platformName: string, own
 
 // A page past the end still reports how many cars there are.
 async function countVehicles(where: string, replacements: Record<string, unknown>) {
-  const [row] = await useDatabase().query<{ n: string }>(`SELECT count(*) AS n FROM vehicles v WHERE ${where}`, { replacements, type: QueryTypes.SELECT })
+  const [row] = await selectRows<{ n: string }>(`SELECT count(*) AS n FROM vehicles v WHERE ${where}`, replacements)
   return Number(row!.n)
 }
 
@@ -58,7 +57,7 @@ async function platformFor(key: string, workshopId: number) {
   return platform
 }
 
-async function assertOwner(ownerUserId: number | null | undefined, workshopId: number) {
+export async function assertOwner(ownerUserId: number | null | undefined, workshopId: number) {
   if (!ownerUserId) return
   const owner = await User.findOne({ where: { id: ownerUserId, workshopId } })
   if (!owner || !owner.roles.includes('client')) {
@@ -66,7 +65,7 @@ async function assertOwner(ownerUserId: number | null | undefined, workshopId: n
   }
 }
 
-function duplicateRef(e: unknown): never {
+export function duplicateRef(e: unknown): never {
   if ((e as { name?: string }).name === 'SequelizeUniqueConstraintError') {
     throw createError({ statusCode: 409, message: 'Another car already has this stock ref.', data: { fields: [{ path: 'stockRef', message: 'Already used' }] } })
   }
@@ -82,7 +81,7 @@ export async function createVehicle(user: SignedIn, input: VehicleCreate) {
     await appendAuditEvent(transaction, { workshopId: user.workshopId, vehicleId: v.id, actorId: user.id, action: 'vehicle.created', entityType: 'vehicle', entityId: v.id, data: { after: { ...fields, platformKey } } })
     return v.id
   })
-  return vehicleView((await Vehicle.findByPk(id, { include }))!)
+  return vehicleView((await Vehicle.findByPk(id, { include: vehicleInclude }))!)
 }
 
 function editable(v: Vehicle) {
@@ -103,5 +102,5 @@ export async function updateVehicle(user: SignedIn, vehicle: Vehicle, input: Veh
       await appendAuditEvent(transaction, { workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'vehicle.updated', entityType: 'vehicle', entityId: vehicle.id, data: { patch } })
     }
   })
-  return vehicleView((await Vehicle.findByPk(vehicle.id, { include }))!)
+  return vehicleView((await Vehicle.findByPk(vehicle.id, { include: vehicleInclude }))!)
 }

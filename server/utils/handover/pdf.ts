@@ -1,8 +1,9 @@
 // The handover sheet as a PDF the owner keeps: set like a workshop manual page, IBM Plex Sans embedded.
+import { formatDateTime } from '../../../shared/utils/dates'
 import type { HandoverProfile, HandoverSheet } from '../../../shared/schemas/handover'
 import { ink, SheetWriter, type Symbol } from './pdf-writer'
 
-const day = (iso: string | null) => iso ? new Date(iso).toLocaleString('en-GB', { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC' : '—'
+const day = (iso: string | null) => iso ? `${formatDateTime(iso, { timeZone: 'UTC' })} UTC` : '—'
 
 function header(w: SheetWriter, s: HandoverSheet) {
   const { doc } = w

@@ -2,7 +2,7 @@ import type { RecordedCheck } from '../../../shared/schemas/workshop-checks'
 // Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
-import { HANDOVER_CAUTIONS, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
+import { handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
 import { checkGuides, checkTitles } from '../../../shared/schemas/road-test-checks'
 import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
@@ -10,6 +10,7 @@ import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas
 import type { TelemetrySummary } from '../../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './words'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
+import { recordedVersionActors } from '../history/recorded-names'
 
 const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
 
@@ -46,14 +47,17 @@ function logLines(s: TelemetrySummary | undefined) {
 }
 
 async function profileSheet(vehicle: Vehicle, profile: Profile, version: ProfileVersion): Promise<HandoverProfile> {
-  const [author, review, rt] = await Promise.all([
+  const [author, review, rt, recorded] = await Promise.all([
     User.findByPk(version.authorId, { attributes: ['name'] }),
     Review.findOne({ where: { versionId: version.id, decision: 'approve' }, order: [['id', 'DESC']], include: [{ model: User, as: 'reviewer', attributes: ['name'] }] }),
-    RoadTest.findOne({ where: { versionId: version.id, verdict: 'pass' }, order: [['id', 'DESC']], include: [{ model: User, as: 'tester', attributes: ['name'] }] }).then(async r => r?.signed ? r : null)
+    RoadTest.findOne({ where: { versionId: version.id, verdict: 'pass' }, order: [['id', 'DESC']], include: [{ model: User, as: 'tester', attributes: ['name'] }] }).then(async r => r?.signed ? r : null),
+    recordedVersionActors(vehicle.workshopId, version.id)
   ])
   const log = rt ? await TelemetryLog.findOne({ where: { roadTestId: rt.id }, order: [['id', 'DESC']] }) : null
   const evaluation = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(vehicle.workshopId))
-  const tester = (rt as RoadTest & { tester?: User } | null)?.tester?.name ?? ''
+  // Names as the history recorded them when each acted; the person's name today only where it recorded none.
+  const tester = rt ? recorded['version.signed-off'] ?? (rt as RoadTest & { tester?: User }).tester?.name ?? '' : ''
+  const approver = review ? recorded['version.approved'] ?? (review as Review & { reviewer?: User }).reviewer?.name : undefined
   return {
     profileName: profile.name, versionNo: version.versionNo, versionId: version.id, signedOffAt: rt?.signed?.at ?? null,
     settings: settingLines(vehicle.platform!.schema, version.parameters), figures: figureLines(evaluation, vehicle.spec),
@@ -65,8 +69,8 @@ async function profileSheet(vehicle: Vehicle, profile: Profile, version: Profile
       log: logLines(log?.summary as TelemetrySummary | undefined)
     } : null,
     people: [
-      { role: 'Proposed by', name: author?.name ?? '—', at: (version.submittedAt ?? version.createdAt)?.toISOString() ?? null, hash: version.contentHash, hashLabel: 'settings hash' },
-      { role: 'Approved by', name: (review as Review & { reviewer?: User } | null)?.reviewer?.name ?? '—', at: review ? new Date(review.createdAt).toISOString() : (version.decidedAt?.toISOString() ?? null), hash: version.contentHash, hashLabel: 'settings hash' },
+      { role: 'Proposed by', name: recorded['version.created'] ?? author?.name ?? '—', at: (version.submittedAt ?? version.createdAt)?.toISOString() ?? null, hash: version.contentHash, hashLabel: 'settings hash' },
+      { role: 'Approved by', name: approver ?? '—', at: review ? new Date(review.createdAt).toISOString() : (version.decidedAt?.toISOString() ?? null), hash: version.contentHash, hashLabel: 'settings hash' },
       { role: 'Road-tested and signed off by', name: tester || '—', at: rt?.signed?.at ?? null, hash: rt?.signed?.contentHash ?? null, hashLabel: 'road-test record hash' }
     ]
   }
@@ -89,6 +93,6 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
     carFacts: carFactLines(vehicle.spec, vehicle.platform?.name ?? ''),
     profiles: await Promise.all(onCar.map(p => profileSheet(vehicle, p, versions.find(v => v.id === p.onCarVersionId)!))),
     enhancements: enhancements.map(s => ({ title: s.title, detail: s.detail, priority: snagPriorityLabels[s.priority as SnagPriority] })),
-    cautions: HANDOVER_CAUTIONS
+    cautions: handoverCautions(vehicle.spec.drivenAxle)
   }
 }

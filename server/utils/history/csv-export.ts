@@ -1,16 +1,20 @@
 import { Readable } from 'node:stream'
 import type { H3Event } from 'h3'
 import type { HistoryEntry, HistoryQuery } from '../../../shared/schemas/history'
-import { auditActionLabel, changePathLabel, changeValueText } from '../../../shared/utils/audit-actions'
+import { eventStory } from '../../../shared/utils/audit-story'
+import { formatDateTime } from '../../../shared/utils/dates'
 import { walkHistory, type HistoryScope } from './read'
 import { csvLine } from './csv'
 
-const COLUMNS = ['event', 'time (UTC)', 'car', 'action', 'what happened', 'entity', 'by', 'changes (before → after)', 'details', 'previous hash', 'hash']
+const COLUMNS = ['event', 'time (UTC)', 'when', 'car', 'action', 'what happened', 'entity', 'by', 'changes (before → after)', 'details', 'previous hash', 'hash']
 
+// The same words as the screen (shared/utils/audit-story.ts), with the codes and hashes in columns of their own.
 export function entryCells(e: HistoryEntry): string[] {
-  const changes = e.changes.map(c => `${changePathLabel(c.path, e.entityType)}: ${c.beforeKnown ? changeValueText(c.before) : '(not recorded)'} → ${changeValueText(c.after)}`).join('; ')
-  return [e.id, e.createdAt, e.vehicle?.stockRef ?? '', e.action, auditActionLabel(e.action), `${e.entityType} ${e.entityId}`,
-    e.actor?.name ?? 'Voltwright', changes, Object.keys(e.details).length ? JSON.stringify(e.details) : '', e.prevHash ?? '', e.hash]
+  const story = eventStory(e)
+  const changes = story.changes.map(c => `${c.label}: ${c.before ?? '(not recorded)'} → ${c.after}`).join('; ')
+  const details = [...story.facts.map(f => `${f.label}: ${f.value}`), ...story.checks.map(c => `${c.title}: ${c.verdict.toLowerCase()}${c.measured ? `, ${c.measured}` : ''}`)].join('; ')
+  return [e.id, e.createdAt, formatDateTime(e.createdAt), e.vehicle?.stockRef ?? '', e.action, story.sentence, `${e.entityType} ${e.entityId}`,
+    e.actor?.name ?? 'Voltwright', changes, details, e.prevHash ?? '', e.hash]
 }
 
 // Streams the filtered history as CSV, a thousand events at a time, so a long history never sits in memory.

@@ -1,16 +1,18 @@
-import { QueryTypes } from 'sequelize'
 import type { HistoryEntry, HistoryPage, HistoryQuery } from '../../../shared/schemas/history'
-import { changeRows, copyState, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
-import { useDatabase } from '../database/db'
+import { changeRows, copyState, creationRows, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
+import { selectRows } from '../database/db'
+import { hashedRecord, type RecordedActor } from './audit'
+import { eventNames } from './names'
+import { parentSettings } from './parents'
 
 export interface HistoryScope { workshopId: number, vehicleId?: number }
 
 interface EventRow {
-  id: string, vehicleId: number | null, actorId: number | null, action: string, entityType: string, entityId: string
+  id: string, form: number, workshopId: number, vehicleId: number | null, actorId: number | null, actor: RecordedActor | null, action: string, entityType: string, entityId: string
   data: Record<string, unknown>, createdAt: Date, prevHash: string | null, hash: string, actorName: string | null, stockRef: string | null
 }
 
-const SELECT = `SELECT e.id, e."vehicleId", e."actorId", e.action, e."entityType", e."entityId", e.data, e."createdAt", e."prevHash", e.hash,
+const SELECT = `SELECT e.id, e.form, e."workshopId", e."vehicleId", e."actorId", e.actor, e.action, e."entityType", e."entityId", e.data, e."createdAt", e."prevHash", e.hash,
   u.name AS "actorName", v."stockRef"
   FROM audit_events e LEFT JOIN users u ON u.id = e."actorId" LEFT JOIN vehicles v ON v.id = e."vehicleId"`
 
@@ -63,12 +65,12 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
     const bound = complete ? BigInt(list[0]!.id) : BigInt(list.filter(needsFold).at(-1)!.id) + BigInt(1)
     return [list[0]!.entityType, list[0]!.entityId, String(bound)]
   })
-  const earlier = await useDatabase().query<FoldRow>(
-    `SELECT x.id, x.action, x."entityType", x."entityId", x.data FROM (VALUES :tuples) AS q(et, ei, bound) CROSS JOIN LATERAL (
+  const earlier = await selectRows<FoldRow>(
+    `SELECT x.id, x.action, x."entityType", x."entityId", x.data FROM unnest(:types::text[], :ids::text[], :bounds::bigint[]) AS q(et, ei, bound) CROSS JOIN LATERAL (
        SELECT id, action, "entityType", "entityId", CASE WHEN action = 'version.created' THEN data ELSE jsonb_build_object('patch', data->'patch', 'after', data->'after') END AS data
          FROM audit_events
-       WHERE "workshopId" = :workshopId AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound::bigint ORDER BY id DESC LIMIT :perEntity) x ORDER BY x.id`,
-    { replacements: { workshopId, tuples, perEntity: PER_ENTITY }, type: QueryTypes.SELECT })
+       WHERE "workshopId" = :workshopId AND "entityType" = q.et AND "entityId" = q.ei AND id < q.bound ORDER BY id DESC LIMIT :perEntity) x ORDER BY x.id`,
+    { workshopId, types: tuples.map(t => t[0]), ids: tuples.map(t => t[1]), bounds: tuples.map(t => t[2]), perEntity: PER_ENTITY })
   const wanted = new Set(needing.map(r => String(r.id)))
   const priorOf = new Map<string, FoldRow[]>()
   for (const e of earlier) {
@@ -88,23 +90,31 @@ async function foldedStates(workshopId: number, rows: EventRow[], complete: bool
   return states
 }
 
-async function toEntries(workshopId: number, rows: EventRow[], complete: boolean): Promise<HistoryEntry[]> {
-  const folds = await foldedStates(workshopId, rows, complete)
-  return rows.map(r => ({
+// Who acted: the name the event recorded (form 2), else the person's name today (form 1 kept only the id).
+function actorOf(r: EventRow): HistoryEntry['actor'] {
+  if (r.actorId === null) return null
+  if (r.actor?.name) return { id: r.actorId, name: r.actor.name, recorded: true }
+  return { id: r.actorId, name: r.actorName ?? 'someone no longer listed', recorded: false }
+}
+
+async function toEntries(workshopId: number, rows: EventRow[], complete: boolean, withRecord: boolean): Promise<HistoryEntry[]> {
+  const [folds, names, parents] = await Promise.all([foldedStates(workshopId, rows, complete), eventNames(workshopId, rows), parentSettings(workshopId, rows)])
+  return rows.map((r, i) => ({
     id: String(r.id), createdAt: new Date(r.createdAt).toISOString(), action: r.action, entityType: r.entityType, entityId: r.entityId,
     vehicle: r.vehicleId ? { id: r.vehicleId, stockRef: r.stockRef ?? '' } : null,
-    actor: r.actorId ? { id: r.actorId, name: r.actorName ?? 'someone no longer listed' } : null,
-    changes: changeRows(r.data, folds.get(String(r.id))), details: eventDetails(r.data), hash: r.hash, prevHash: r.prevHash
+    actor: actorOf(r),
+    changes: r.action === 'version.created' ? creationRows(r.data, parents.get(String(r.id))) : changeRows(r.data, folds.get(String(r.id))),
+    details: eventDetails(r.data), names: names[i]!, hash: r.hash, prevHash: r.prevHash, form: r.form,
+    ...(withRecord ? { record: hashedRecord(r) } : {})
   }))
 }
 
 // Newest first, keyset-paged by id: a page never repeats or skips an event, however many arrive meanwhile.
 export async function readHistory(scope: HistoryScope, q: HistoryQuery): Promise<HistoryPage> {
   const { where, replacements } = conditions(scope, q)
-  const rows = await useDatabase().query<EventRow>(`${SELECT} WHERE ${where} ORDER BY e.id DESC LIMIT :limit`,
-    { replacements: { ...replacements, limit: q.limit + 1 }, type: QueryTypes.SELECT })
+  const rows = await selectRows<EventRow>(`${SELECT} WHERE ${where} ORDER BY e.id DESC LIMIT :limit`, { ...replacements, limit: q.limit + 1 })
   const page = rows.slice(0, q.limit)
-  const items = await toEntries(scope.workshopId, page, !q.action && !q.actorId && !q.from && !q.to)
+  const items = await toEntries(scope.workshopId, page, !q.action && !q.actorId && !q.from && !q.to, q.include === 'record')
   return { items, nextCursor: rows.length > q.limit ? items[items.length - 1]!.id : null }
 }
 
@@ -122,7 +132,6 @@ export async function* walkHistory(scope: HistoryScope, q: Omit<HistoryQuery, 'l
 // The actions and people that occur in a car's or a workshop's history, for the filters. Over a whole
 // workshop a skip scan on the (workshopId, action) and (workshopId, actorId) indexes keeps this quick.
 export async function historyFacets(scope: HistoryScope) {
-  const db = useDatabase()
   const replacements = { workshopId: scope.workshopId, vehicleId: scope.vehicleId }
   const skipScan = (col: string) => `WITH RECURSIVE s AS (
       (SELECT ${col} AS v FROM audit_events WHERE "workshopId" = :workshopId AND ${col} IS NOT NULL ORDER BY ${col} LIMIT 1)
@@ -133,8 +142,8 @@ export async function historyFacets(scope: HistoryScope) {
     ? `SELECT DISTINCT ${col} AS v FROM audit_events WHERE "workshopId" = :workshopId AND "vehicleId" = :vehicleId AND ${col} IS NOT NULL`
     : skipScan(col)
   const [actions, actors] = await Promise.all([
-    db.query<{ v: string }>(`${distinct('action')} ORDER BY 1`, { replacements, type: QueryTypes.SELECT }),
-    db.query<{ id: number, name: string }>(`SELECT u.id, u.name FROM users u WHERE u."workshopId" = :workshopId AND u.id IN (${distinct('"actorId"')}) ORDER BY u.name`, { replacements, type: QueryTypes.SELECT })
+    selectRows<{ v: string }>(`${distinct('action')} ORDER BY 1`, replacements),
+    selectRows<{ id: number, name: string }>(`SELECT u.id, u.name FROM users u WHERE u."workshopId" = :workshopId AND u.id IN (${distinct('"actorId"')}) ORDER BY u.name`, replacements)
   ])
   return { actions: actions.map(a => a.v), actors }
 }

@@ -20,10 +20,17 @@ export function absoluteUrl(path: string) {
   return new URL(path, useRuntimeConfig().public.baseUrl).toString()
 }
 
+// NUXT_SMTP_TLS: 'none' for the local sink, 'starttls' (port 587, TLS required) or 'implicit' (port 465) for a
+// mail service, with NUXT_SMTP_USER and NUXT_SMTP_PASSWORD when it asks for them (docs/deployment.md).
 let transporter: Transporter | undefined
 function smtp(): Transporter {
   const config = useRuntimeConfig()
-  transporter ??= nodemailer.createTransport({ host: config.smtpHost, port: Number(config.smtpPort), secure: false, ignoreTLS: true, connectionTimeout: 5000, greetingTimeout: 5000 })
+  const tls = String(config.smtpTls)
+  const auth = config.smtpUser ? { user: String(config.smtpUser), pass: String(config.smtpPassword) } : undefined
+  transporter ??= nodemailer.createTransport({
+    host: config.smtpHost, port: Number(config.smtpPort), auth, connectionTimeout: 5000, greetingTimeout: 5000,
+    secure: tls === 'implicit', requireTLS: tls === 'starttls', ignoreTLS: tls !== 'starttls' && tls !== 'implicit'
+  })
   return transporter
 }
 

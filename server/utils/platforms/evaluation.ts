@@ -1,6 +1,7 @@
 import type { ErrorObject } from 'ajv'
 import { evaluate, workshopSettingsSchema, defaultSettings, type Evaluation, type EvaluationError, type PlatformLike, type WorkshopSettings } from '../../../shared/compute'
 import { compileParameterValidator } from '../../../shared/platforms/ajv'
+import { unknownSettings } from '../../../shared/platforms/keywords'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 import { Workshop } from '../../models'
 
@@ -21,11 +22,32 @@ function ajvPath(e: ErrorObject): string {
   return name ? `parameters.${name}` : 'parameters'
 }
 
+// Settings the drive unit's schema does not define are refused outright where they come in (evaluate, read-backs),
+// before any check of their values.
+export function assertKnownSettings(platform: PlatformLike, parameters: Record<string, unknown>, prefix = 'parameters') {
+  const unknown = unknownSettings(platform.schema, Object.keys(parameters))
+  if (!unknown.length) return
+  const names = unknown.slice(0, 20).map(n => n.slice(0, 60))
+  const fields = names.map(n => ({ path: `${prefix}.${n}`, message: `Not a setting of the ${platform.name}` }))
+  throw createError({ statusCode: 400, message: `Not settings of the ${platform.name}: ${names.join(', ')}`.slice(0, 500), data: { fields, unknown: names } })
+}
+
 // The server's evaluation: the shared computation, plus the platform's JSON Schema checked by ajv
-// (compiled once per platform). A field evaluate already flagged is not reported twice.
+// (compiled once per platform). A field evaluate already flagged is not reported twice. Settings the schema does
+// not define (in data stored before they were refused) are reported as errors and never reach ajv.
 export function evaluateOnServer(spec: VehicleSpec, platform: PlatformLike, parameters: Record<string, unknown>, settings: WorkshopSettings): Evaluation {
   const result = evaluate(spec, platform, parameters, settings)
+  const unknown = unknownSettings(platform.schema, Object.keys(parameters))
+  if (unknown.length) {
+    const seen = new Set(result.errors.map(e => e.path))
+    const extra = unknown.map(n => ({ path: `parameters.${n}`, message: `Not a setting of the ${platform.name}` })).filter(e => !seen.has(e.path))
+    return { ...result, valid: false, errors: [...result.errors, ...extra] }
+  }
   const validate = compileParameterValidator(platform)
+  if (!validate) {
+    const error = { path: 'platform.schema', message: `The ${platform.name}'s schema uses keywords Voltwright no longer accepts; the workshop manager should upload it again` }
+    return { ...result, valid: false, errors: [...result.errors, error] }
+  }
   if (!validate(parameters)) {
     const seen = new Set(result.errors.map(e => e.path))
     const extra: EvaluationError[] = []

@@ -20,7 +20,7 @@ export async function findWorkshopPlatform(key: string, workshopId: number, tran
 export async function createPlatform(admin: SignedIn, input: PlatformUpload): Promise<PlatformView> {
   const check = validatePlatform(input)
   if (!check.ok) {
-    throw createError({ statusCode: 400, message: `The drive unit's schema cannot be used: ${check.errors.join('; ')}`.slice(0, 1000), data: { problems: check.errors, fields: [{ path: 'schema', message: check.errors[0] }] } })
+    throw createError({ statusCode: 400, message: `The drive unit's schema cannot be used: ${check.errors.join('; ')}`.slice(0, 1000), data: { problems: check.errors, refused: check.refused ?? [], fields: [{ path: 'schema', message: check.errors[0] }] } })
   }
   return useDatabase().transaction(async (transaction) => {
     // Unique among the shared units and this workshop's own (migration 0009); another workshop's keys are its own business.

@@ -10,7 +10,7 @@ import { findTestedVersion } from './record'
 export async function awaitingRoadTests(user: SignedIn): Promise<{ items: AwaitingRoadTest[], total: number }> {
   const versions = await ProfileVersion.findAll({
     where: { workshopId: user.workshopId, state: 'approved' },
-    include: [{ model: Profile, as: 'profile', include: [{ model: Vehicle, as: 'vehicle' }] }],
+    include: [{ model: Profile, as: 'profile', required: true, include: [{ model: Vehicle, as: 'vehicle', required: true }] }],
     order: [['decidedAt', 'ASC'], ['id', 'ASC']]
   })
   const counts = versions.length
@@ -33,7 +33,9 @@ export async function roadTestBrief(user: SignedIn, versionId: number) {
   return {
     version: { id: version.id, versionNo: version.versionNo, state: version.state, authorId: version.authorId, parameters: version.parameters },
     profile: { id: profile.id, name: profile.name },
-    vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null },
+    vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null, spec: vehicle.spec },
+    // The drive unit as the browser's evaluation needs it, so a roadside change shows its warnings as it is typed.
+    platform: { key: vehicle.platform!.key, name: vehicle.platform!.name, motorMaxRpm: vehicle.platform!.motorMaxRpm, schema: vehicle.platform!.schema },
     platformSchema: vehicle.platform?.schema ?? null,
     expected: {
       maxStartGradePct: figures.maxStartGradePct, creepHoldGradePct: figures.creepHoldGradePct, liftOffDecelMs2: figures.liftOffDecelMs2,

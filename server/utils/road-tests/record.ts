@@ -6,11 +6,11 @@ import type { SignedIn } from '../guards/guards'
 import { isStaff } from '../../../shared/schemas/roles'
 import type { RoadTestCreate } from '../../../shared/schemas/road-test'
 import type { AttachmentView, RoadTestListItem, RoadTestView } from '../../../shared/schemas/road-test-views'
-import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { checksFor, recordedCheck } from '../workshop/checks'
 import { requireExtraChecks } from './extra-checks'
+import { requireTransition } from '../versions/views'
 
 export interface TestedVersion { version: ProfileVersion, profile: Profile, vehicle: Vehicle }
 
@@ -22,29 +22,50 @@ export async function findTestedVersion(user: SignedIn, versionId: number, trans
   const version = await ProfileVersion.findOne({ where: { id: versionId, workshopId: user.workshopId }, transaction })
   if (!version) throw notFound('version')
   const profile = await Profile.findByPk(version.profileId, { transaction })
-  const vehicle = await Vehicle.findOne({ where: { id: profile!.vehicleId, workshopId: user.workshopId }, include: [{ model: Platform, as: 'platform' }], transaction })
-  if (!profile || !vehicle) throw notFound('version')
+  // A kit's baseline has no car: it is never road-tested itself, its cars are.
+  if (!profile?.vehicleId) throw createError({ statusCode: 409, message: 'This is a kit baseline version; road tests are of the cars built from the kit.' })
+  const vehicle = await Vehicle.findOne({ where: { id: profile.vehicleId, workshopId: user.workshopId }, include: [{ model: Platform, as: 'platform' }], transaction })
+  if (!vehicle) throw notFound('version')
   return { version, profile, vehicle }
 }
 
-export function requireApproved(version: ProfileVersion, doing: string) {
-  if (version.state !== 'approved') {
-    const label = versionStateLabels[version.state as VersionState] ?? version.state
-    throw createError({ statusCode: 409, message: `Version ${version.versionNo} is ${label.toLowerCase()} (${version.state}); only an approved version can be ${doing}.`, data: { state: version.state } })
+// A road test's date lies between the version's approval and now; a phone's clock may run a little ahead of
+// the server's, so "now" has two minutes' room (docs/version-lifecycle.md).
+export const CLOCK_SKEW_MS = 2 * 60_000
+const minute = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ')
+
+export function requireTestedAtInRange(version: ProfileVersion, testedAt: Date, now = new Date()) {
+  const field = (message: string) => createError({ statusCode: 400, message, data: { fields: [{ path: 'testedAt', message }] } })
+  if (testedAt.getTime() > now.getTime() + CLOCK_SKEW_MS) throw field(`The road test's date (${minute(testedAt)} UTC) is in the future.`)
+  if (version.decidedAt && testedAt.getTime() < new Date(version.decidedAt).getTime()) {
+    throw field(`The road test's date (${minute(testedAt)} UTC) is before version ${version.versionNo} was approved (${minute(new Date(version.decidedAt))} UTC); only an approved version can be road-tested.`)
   }
 }
 
 export const carLabel = (v: Pick<Vehicle, 'stockRef' | 'year' | 'make' | 'model'>) => `${v.stockRef} ${v.year} ${v.make} ${v.model}`
 
-export async function recordRoadTest(user: SignedIn, versionId: number, input: RoadTestCreate) {
+// The record a send with this key made already, if any: a repeated send answers with it (`repeated`).
+async function alreadySent(user: SignedIn, versionId: number, key: string | undefined) {
+  if (!key) return null
+  const rt = await RoadTest.findOne({ where: { workshopId: user.workshopId, idempotencyKey: key } })
+  if (rt && rt.versionId !== versionId) throw createError({ statusCode: 409, message: 'This send key belongs to a road test of another version.' })
+  return rt
+}
+
+export async function recordRoadTest(user: SignedIn, versionId: number, input: RoadTestCreate): Promise<RoadTestView & { repeated: boolean }> {
+  const earlier = await alreadySent(user, versionId, input.idempotencyKey)
+  if (earlier) return { ...await readRoadTest(user, earlier.id), repeated: true }
   const { version, vehicle } = await findTestedVersion(user, versionId)
-  requireApproved(version, 'road-tested')
+  requireTransition(version, 'road-test', user)
+  const testedAt = input.testedAt ?? new Date()
+  requireTestedAtInRange(version, testedAt)
   const defs = await checksFor(user.workshopId, vehicle.platform?.key ?? null)
   requireExtraChecks(defs, input.checks)
+  let repeated = false
   const id = await useDatabase().transaction(async (transaction) => {
     const rt = await RoadTest.create({
-      workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id,
-      testedAt: input.testedAt ?? new Date(), conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict,
+      workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id, idempotencyKey: input.idempotencyKey ?? null,
+      testedAt, conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict,
       checkList: defs.map(recordedCheck)
     }, { transaction })
     // A car on its first road test has moved on from the workshop floor.
@@ -54,11 +75,17 @@ export async function recordRoadTest(user: SignedIn, versionId: number, input: R
     }
     await appendAuditEvent(transaction, {
       workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'road-test.recorded', entityType: 'road-test', entityId: rt.id,
-      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict })) }
+      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict, values: c.values })) }
     })
     return rt.id
+  }).catch(async (e: Error) => {
+    // Two sends with one key at once: the unique index lets one through; the other answers with its record.
+    const raced = e.name === 'SequelizeUniqueConstraintError' ? await alreadySent(user, versionId, input.idempotencyKey) : null
+    if (!raced) throw e
+    repeated = true
+    return raced.id
   })
-  return readRoadTest(user, id)
+  return { ...await readRoadTest(user, id), repeated }
 }
 
 // A road test of the signed-in person's workshop (staff only); 404 otherwise.

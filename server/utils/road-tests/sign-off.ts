@@ -5,7 +5,8 @@ import { Attachment, Profile, ProfileVersion, RoadTest, Snag, TelemetryLog, User
 import type { SignedIn } from '../guards/guards'
 import { mandatoryCheckKeys, checkVerdictLabels, type CheckVerdict } from '../../../shared/schemas/road-test'
 import { unresolvedSnagStatuses } from '../../../shared/schemas/snag'
-import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
+import type { VersionState } from '../../../shared/schemas/version'
+import { failedPeopleRules, personRefusal, stateAfter, stateRefusal, versionLifecycle, type PersonRule } from '../../../shared/schemas/version-lifecycle'
 import type { VehicleStatus } from '../../../shared/schemas/vehicle'
 import { canonicalJson } from '../../../shared/utils/canonical-json'
 import { roadTestRecordContent } from '../../../shared/utils/road-test-record'
@@ -14,6 +15,7 @@ import { clearDrift } from '../fleet/readbacks'
 import { sha256Hex, appendAuditEvent } from '../history/audit'
 import { queueMail, peopleWithRole, absoluteUrl } from '../mail/outbox'
 import { carLabel, findRoadTest, readRoadTest } from './record'
+import { refreshOnCarEvaluation } from '../fleet/on-car-evaluation'
 
 export interface MissingForSignOff { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }
 
@@ -29,15 +31,15 @@ export async function roadTestRecordHash(rt: RoadTest, version: ProfileVersion, 
   })))
 }
 
+const personCodes: Record<PersonRule, string> = { 'driver': 'not-the-tester', 'not-author': 'tester-is-author', 'author': 'not-the-author' }
+
 async function whatIsMissing(user: SignedIn, rt: RoadTest, version: ProfileVersion, transaction: Transaction): Promise<MissingForSignOff[]> {
   const missing: MissingForSignOff[] = []
   if (rt.signed) missing.push({ code: 'already-signed', message: `This road test was already signed off on ${new Date(rt.signed.at).toISOString().slice(0, 16).replace('T', ' ')}.` })
-  if (version.state !== 'approved') {
-    const label = versionStateLabels[version.state as VersionState] ?? version.state
-    missing.push({ code: 'version-not-approved', message: `Version ${version.versionNo} is ${label.toLowerCase()} (${version.state}), not approved.` })
-  }
-  if (rt.testerId !== user.id) missing.push({ code: 'not-the-tester', message: 'Only the tester who drove this road test can sign it off.' })
-  if (version.authorId === user.id) missing.push({ code: 'tester-is-author', message: 'You wrote this version: a tester who is not its author must road-test and sign it off.' })
+  const notApproved = stateRefusal('sign-off', version.state as VersionState, version.versionNo)
+  if (notApproved) missing.push({ code: 'version-not-approved', message: notApproved })
+  const failed = failedPeopleRules('sign-off', { roles: user.roles, isAuthor: version.authorId === user.id, isDriver: rt.testerId === user.id })
+  for (const rule of failed) missing.push({ code: personCodes[rule], message: personRefusal('sign-off', rule) })
   if (rt.verdict !== 'pass') missing.push({ code: 'verdict-not-pass', message: 'The road test did not pass.' })
   for (const key of mandatoryCheckKeys) {
     const check = rt.checks.find(c => c.key === key)
@@ -70,9 +72,11 @@ export async function signOffRoadTest(user: SignedIn, id: number) {
     if (missing.length) throw createError({ statusCode: 409, message: `Cannot sign off yet. ${missing.map(m => m.message).join(' ')}`, data: { missing } })
 
     const previousId = profile!.onCarVersionId && profile!.onCarVersionId !== version!.id ? profile!.onCarVersionId : null
-    if (previousId) await ProfileVersion.update({ state: 'superseded' }, { where: { id: previousId, state: 'signed-off' }, transaction })
-    await version!.update({ state: 'signed-off' }, { transaction })
+    const supersede = versionLifecycle.supersede
+    if (previousId) await ProfileVersion.update({ state: stateAfter('supersede', supersede.from[0]!) }, { where: { id: previousId, state: supersede.from as VersionState[] }, transaction })
+    await version!.update({ state: stateAfter('sign-off', version!.state as VersionState) }, { transaction })
     await profile!.update({ onCarVersionId: version!.id }, { transaction })
+    await refreshOnCarEvaluation(transaction, profile!.id)
     const at = new Date()
     const contentHash = await roadTestRecordHash(rt!, version!, at, transaction)
     await rt!.update({ signed: { testerId: user.id, at: at.toISOString(), contentHash } }, { transaction })

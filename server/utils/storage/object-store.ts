@@ -11,7 +11,7 @@ export function objectStore(): S3Client {
   const config = useRuntimeConfig()
   client = new S3Client({
     endpoint: config.s3Endpoint,
-    region: 'us-east-1',
+    region: config.s3Region,
     forcePathStyle: true,
     // s3rver knows one key pair, S3RVER/S3RVER; production sets real ones (NUXT_S3_ACCESS_KEY_ID, NUXT_S3_SECRET_ACCESS_KEY).
     credentials: { accessKeyId: config.s3AccessKeyId || 'S3RVER', secretAccessKey: config.s3SecretAccessKey || 'S3RVER' },

@@ -9,8 +9,9 @@ import { megabytes, receiveUpload, tooLarge, UploadRefused } from './uploads'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { newObjectKey, putObject, deleteObjects } from './object-store'
+import { PHOTO_MAX_MB } from '../../../shared/schemas/photo'
 
-export const PHOTO_MAX_BYTES = megabytes(15)
+export const PHOTO_MAX_BYTES = megabytes(PHOTO_MAX_MB)
 export const THUMBNAIL_PX = 320
 const FORMATS: Record<string, string> = { 'image/jpeg': 'jpeg', 'image/png': 'png', 'image/webp': 'webp' }
 
@@ -52,7 +53,7 @@ export async function uploadPhoto(event: H3Event, user: SignedIn, owner: PhotoOw
           sha256: createHash('sha256').update(image).digest('hex'), uploadedBy: user.id, caption: owner.caption
         }, { transaction })
         await appendAuditEvent(transaction, {
-          workshopId: user.workshopId, vehicleId: owner.vehicleId, actorId: user.id, action: `${owner.ownerType}.photo-added`, entityType: owner.ownerType, entityId: owner.ownerId,
+          workshopId: user.workshopId, vehicleId: owner.vehicleId, actorId: user.id, action: owner.ownerType === 'snag' ? 'snag.photo-added' : 'road-test.photo-added', entityType: owner.ownerType, entityId: owner.ownerId,
           data: { attachmentId: a.id, filename: a.filename, bytes: a.bytes, sha256: a.sha256, caption: owner.caption, width: meta.width, height: meta.height }
         })
         return { ...attachmentView(a), width: meta.width, height: meta.height }

@@ -27,6 +27,13 @@ export function receiveUpload<T>(event: H3Event, opts: { field: string, maxBytes
   if (Number.isFinite(declared) && declared > opts.maxBytes + ENVELOPE_BYTES) {
     return Promise.reject(tooLarge(opts.maxBytes))
   }
+  let bb: busboy.Busboy
+  try {
+    // File names as UTF-8 (RFC 7578 section 4.2), not busboy's default of Latin-1.
+    bb = busboy({ headers: req.headers, defParamCharset: 'utf8', limits: { files: 1, fileSize: opts.maxBytes, fields: 20, fieldSize: 16 * 1024 } })
+  } catch {
+    return Promise.reject(new UploadRefused(400, `The upload has no multipart boundary; send the file as multipart/form-data in the field "${opts.field}".`))
+  }
   return new Promise<T>((resolve, reject) => {
     let settled = false
     let started = false
@@ -39,7 +46,6 @@ export function receiveUpload<T>(event: H3Event, opts: { field: string, maxBytes
       req.unpipe(bb)
       req.resume()
     }
-    const bb = busboy({ headers: req.headers, limits: { files: 1, fileSize: opts.maxBytes, fields: 20, fieldSize: 16 * 1024 } })
     bb.on('file', (name, stream, info) => {
       if (name !== opts.field || started) return stream.resume()
       started = true
@@ -71,4 +77,10 @@ export function tooLarge(maxBytes: number) {
 export function uploadError(e: unknown): never {
   if (e instanceof UploadRefused) throw createError({ statusCode: e.statusCode, message: e.message, data: e.data })
   throw e
+}
+
+// An ASCII stand-in for old clients and the exact UTF-8 name for the rest (RFC 6266 section 4.3, RFC 8187).
+export function contentDisposition(kind: 'inline' | 'attachment', filename: string): string {
+  const exact = encodeURIComponent(filename).replace(/['()*]/g, c => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)
+  return `${kind}; filename="${filename.replace(/[^\w.-]/g, '_')}"; filename*=UTF-8''${exact}`
 }

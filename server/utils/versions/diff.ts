@@ -1,4 +1,3 @@
-import { QueryTypes } from 'sequelize'
 import type { SignedIn } from '../guards/guards'
 import { schemaProperties, type SettingValues } from '../../../shared/compute/parameter-input'
 import type { Evaluation, PlatformLike } from '../../../shared/compute/types'
@@ -9,25 +8,24 @@ import { canonicalJson } from '../../../shared/utils/canonical-json'
 import { jsonPatch } from '../../../shared/utils/json-patch'
 import { settingLabel, settingValueWords } from '../../../shared/utils/setting-words'
 import type { ParameterDiffRow, VersionDiff, VersionSide } from '../../../shared/schemas/profile-views'
-import { useDatabase } from '../database/db'
+import { selectRows } from '../database/db'
 import { settingsOf, evaluateOnServer } from '../platforms/evaluation'
 import { figureDiff, numericChange, warningDiff } from './diff-figures'
 
 interface PairRow {
   id: number, versionNo: number, state: VersionState, parameters: SettingValues, profileName: string,
-  vehicleId: number, spec: VehicleSpec, platformKey: string, platformName: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: unknown, settings: Record<string, unknown>
+  vehicleId: number | null, kitId: number | null, spec: VehicleSpec, platformKey: string, platformName: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: unknown, settings: Record<string, unknown>
 }
 
 // Both versions with their car, drive unit and workshop settings in one plain query (the diff is on the
 // engineer's hot path; nested model includes cost more than the two evaluations).
 async function loadPair(user: SignedIn, aId: number, bId: number) {
-  const rows = await useDatabase().query<PairRow>(
-    `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", v.spec,
+  const rows = await selectRows<PairRow>(
+    `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", k.id AS "kitId", COALESCE(v.spec, k."specTemplate") AS spec,
             pl.key AS "platformKey", pl.name AS "platformName", pl."motorMaxRpm", pl."torqueConstantNmPerA", pl.schema, w.settings
-       FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId" JOIN vehicles v ON v.id = p."vehicleId"
-       JOIN platforms pl ON pl.id = v."platformId" JOIN workshops w ON w.id = pv."workshopId"
-      WHERE pv.id IN (:ids) AND pv."workshopId" = :workshopId`,
-    { replacements: { ids: [aId, bId], workshopId: user.workshopId }, type: QueryTypes.SELECT })
+       FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId" LEFT JOIN vehicles v ON v.id = p."vehicleId" LEFT JOIN kits k ON k.id = p."kitId"
+       JOIN platforms pl ON pl.id = COALESCE(v."platformId", k."platformId") JOIN workshops w ON w.id = pv."workshopId"
+      WHERE pv.id = ANY(:ids::int[]) AND pv."workshopId" = :workshopId`, { ids: [aId, bId], workshopId: user.workshopId })
   const pick = (id: number) => {
     const row = rows.find(r => r.id === id)
     if (!row) throw createError({ statusCode: 404, message: 'No such version in this workshop.' })
@@ -73,7 +71,7 @@ export function settingsPatch(a: SettingValues, b: SettingValues, aSchema: unkno
 }
 
 const platformOf = (r: PairRow): PlatformLike => ({ key: r.platformKey, name: r.platformName, motorMaxRpm: r.motorMaxRpm, torqueConstantNmPerA: r.torqueConstantNmPerA, schema: r.schema })
-const head = (r: PairRow) => ({ id: r.id, versionNo: r.versionNo, profileName: r.profileName, state: r.state, vehicleId: r.vehicleId })
+const head = (r: PairRow) => ({ id: r.id, versionNo: r.versionNo, profileName: r.profileName, state: r.state, vehicleId: r.vehicleId, kitId: r.kitId })
 const side = (r: PairRow, e: Evaluation): VersionSide =>
   ({ versionId: r.id, label: `${r.profileName} v${r.versionNo}`, valid: e.valid, errors: e.errors, warnings: e.warnings, figures: e.figures, curves: e.curves })
 

@@ -3,19 +3,21 @@ import { Profile, ProfileVersion, Review, User, type Vehicle } from '../../model
 import type { SignedIn } from '../guards/guards'
 import type { EvaluationSnapshot, HistoryEntry, ProfileView, VersionView } from '../../../shared/schemas/profile-views'
 import { useDatabase } from '../database/db'
+import { ACTOR_NAME_SQL } from '../history/recorded-names'
 import { vehicleView } from '../fleet/vehicles'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
+import { profileBaselines } from '../kits/baseline'
 import { reviewView, versionSummary, authorInclude, reviewsInclude, loadVersion } from './views'
 
 interface EventRow { id: string, action: string, actorId: number | null, actorName: string | null, createdAt: Date, data: Record<string, unknown> }
 
 // The version's own events from the audit chain: created, edited, submitted, decided, withdrawn.
-async function versionHistory(vehicleId: number, versionId: number): Promise<HistoryEntry[]> {
+async function versionHistory(workshopId: number, versionId: number): Promise<HistoryEntry[]> {
   const rows = await useDatabase().query<EventRow>(
-    `SELECT e.id, e.action, e."actorId", u.name AS "actorName", e."createdAt", e.data
+    `SELECT e.id, e.action, e."actorId", ${ACTOR_NAME_SQL} AS "actorName", e."createdAt", e.data
        FROM audit_events e LEFT JOIN users u ON u.id = e."actorId"
-      WHERE e."vehicleId" = :vehicleId AND e."entityType" = 'version' AND e."entityId" = :versionId ORDER BY e.id`,
-    { replacements: { vehicleId, versionId: String(versionId) }, type: QueryTypes.SELECT })
+      WHERE e."workshopId" = :workshopId AND e."entityType" = 'version' AND e."entityId" = :versionId ORDER BY e.id`,
+    { replacements: { workshopId, versionId: String(versionId) }, type: QueryTypes.SELECT })
   return rows.map(r => ({
     id: String(r.id), action: r.action, actor: r.actorId ? { id: r.actorId, name: r.actorName ?? '' } : null,
     createdAt: new Date(r.createdAt).toISOString(), data: r.data
@@ -23,12 +25,12 @@ async function versionHistory(vehicleId: number, versionId: number): Promise<His
 }
 
 export async function readVersion(user: SignedIn, id: number): Promise<VersionView> {
-  const { version: v, profile, vehicle, platform } = await loadVersion(user, id)
+  const { version: v, profile, vehicle, kit, platform, subject } = await loadVersion(user, id)
   const [author, reviews, parent, history, settings] = await Promise.all([
     User.findByPk(v.authorId, { attributes: ['id', 'name'] }),
     Review.findAll({ where: { versionId: v.id }, include: [{ model: User, as: 'reviewer', attributes: ['id', 'name'] }], order: [['id', 'ASC']] }),
     v.parentVersionId ? ProfileVersion.findByPk(v.parentVersionId, { attributes: ['id', 'versionNo'] }) : null,
-    versionHistory(vehicle.id, v.id),
+    versionHistory(user.workshopId, v.id),
     loadWorkshopSettings(user.workshopId)
   ])
   v.author = author ?? undefined
@@ -42,12 +44,14 @@ export async function readVersion(user: SignedIn, id: number): Promise<VersionVi
     lockVersion: v.lockVersion,
     onCar: profile.onCarVersionId === v.id,
     profile: { id: profile.id, name: profile.name, onCarVersionId: profile.onCarVersionId },
-    vehicle: vehicleView(vehicle),
+    vehicle: vehicle ? vehicleView(vehicle) : null,
+    kit: kit ? { id: kit.id, name: kit.name, specTemplate: kit.specTemplate } : null,
+    baselineVersionId: v.baselineVersionId ?? null,
     platform: { key: platform.key, name: platform.name, motorMaxRpm: platform.motorMaxRpm, torqueConstantNmPerA: platform.torqueConstantNmPerA ?? null, schema: platform.schema },
     parent: parent ? { id: parent.id, versionNo: parent.versionNo } : null,
     reviews: reviews.map(reviewView),
     history,
-    liveEvaluation: evaluateOnServer(vehicle.spec, platform, v.parameters, settings)
+    liveEvaluation: evaluateOnServer(subject.spec, platform, v.parameters, settings)
   }
 }
 
@@ -58,9 +62,10 @@ export async function listProfiles(user: SignedIn, vehicle: Vehicle): Promise<{ 
     include: [{ model: ProfileVersion, as: 'versions', include: [authorInclude, reviewsInclude] }],
     order: [['name', 'ASC'], [{ model: ProfileVersion, as: 'versions' }, 'versionNo', 'DESC']]
   })
+  const baselines = await profileBaselines(profiles)
   const items = profiles.map(p => ({
-    id: p.id, vehicleId: p.vehicleId, name: p.name, onCarVersionId: p.onCarVersionId,
-    versions: (p.versions ?? []).map(versionSummary)
+    id: p.id, vehicleId: vehicle.id, name: p.name, onCarVersionId: p.onCarVersionId,
+    versions: (p.versions ?? []).map(versionSummary), baseline: baselines.get(p.id) ?? null
   }))
   return { items, total: items.length }
 }

@@ -1,51 +1,48 @@
-import { requireKnownSettings } from './settings-check'
-// Settings changed at the roadside become a new version (origin roadside, parent the tested version, in
-// review) so they go through four-eyes review like any other. Numbered max+1 with the profile row locked.
-import { QueryTypes } from 'sequelize'
-import { Profile, ProfileVersion, Vehicle, Platform } from '../../models'
+// A roadside change (docs/version-lifecycle.md): settings changed while driving an open road test become the
+// next version from the tested one (origin roadside), made by the one insert and sent for review by the one
+// submit, in one transaction, so a refused submit leaves nothing behind.
+import { Platform, Profile, ProfileVersion, RoadTest, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { RoadsideVersionInput } from '../../../shared/schemas/road-test'
 import { canonicalJson } from '../../../shared/utils/canonical-json'
 import { useDatabase } from '../database/db'
-import { appendAuditEvent } from '../history/audit'
-import { queueMail, peopleWithRole, absoluteUrl } from '../mail/outbox'
-import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
-import { carLabel, findRoadTest } from '../road-tests/record'
-import { versionContentHash, snapshotOf } from './content'
+import { loadWorkshopSettings } from '../platforms/evaluation'
+import { findRoadTest } from '../road-tests/record'
+import { insertVersion } from './insert'
+import { readVersion } from './read'
+import { requireKnownSettings } from './settings-check'
+import { submitLoaded } from './submit'
+import { loadVersion, requireTransition } from './views'
+
+// Open: not signed off, and the version it tested still approved; only its driver may change it.
+function requireOpen(user: SignedIn, rt: RoadTest, tested: ProfileVersion) {
+  requireTransition(tested, 'roadside-change', user, rt.testerId)
+  if (rt.signed) {
+    throw createError({ statusCode: 409, message: `Road test ${rt.id} was signed off on ${rt.signed.at.slice(0, 10)}: it is closed. Start a new version from the one on the car instead.`, data: { signed: true } })
+  }
+}
 
 export async function recordRoadsideVersion(user: SignedIn, roadTestId: number, input: RoadsideVersionInput) {
-  const rt = await findRoadTest(user, roadTestId)
-  const tested = await ProfileVersion.findByPk(rt.versionId)
-  const vehicle = await Vehicle.findByPk(rt.vehicleId, { include: [{ model: Platform, as: 'platform' }] })
-  if (canonicalJson(input.parameters) === canonicalJson(tested!.parameters)) {
-    throw createError({ statusCode: 400, message: `These are the settings of version ${tested!.versionNo}: record only what changed at the roadside.`, data: { fields: [{ path: 'parameters', message: 'Nothing changed' }] } })
-  }
-  requireKnownSettings(vehicle!.platform?.schema, input.parameters)
-  const evaluation = evaluateOnServer(vehicle!.spec, vehicle!.platform!, input.parameters, await loadWorkshopSettings(user.workshopId))
-  if (!evaluation.valid) {
-    throw createError({ statusCode: 400, message: `Please check: ${evaluation.errors.map(e => `${e.path} (${e.message})`).join('; ')}`.slice(0, 500), data: { fields: evaluation.errors } })
-  }
-  const sequelize = useDatabase()
-  const created = await sequelize.transaction(async (transaction) => {
-    const profile = await Profile.findByPk(tested!.profileId, { lock: transaction.LOCK.UPDATE, transaction })
-    const [{ next }] = await sequelize.query<{ next: number }>('SELECT coalesce(max("versionNo"), 0) + 1 AS next FROM profile_versions WHERE "profileId" = :p', { replacements: { p: profile!.id }, type: QueryTypes.SELECT, transaction }) as [{ next: number }]
-    const now = new Date()
-    const content = { profileId: profile!.id, versionNo: Number(next), parentVersionId: tested!.id, parameters: input.parameters, rationale: input.rationale, authorId: user.id }
-    const version = await ProfileVersion.create({
-      ...content, workshopId: user.workshopId, state: 'in-review', origin: 'roadside', roadTestId: rt.id,
-      evaluation: snapshotOf(evaluation, now) as unknown as Record<string, unknown>, contentHash: versionContentHash({ ...content, origin: 'roadside' }), submittedAt: now
-    }, { transaction })
-    await appendAuditEvent(transaction, {
-      workshopId: user.workshopId, vehicleId: rt.vehicleId, actorId: user.id, action: 'version.roadside-recorded', entityType: 'version', entityId: version.id,
-      data: { roadTestId: rt.id, profileId: profile!.id, versionNo: version.versionNo, parentVersionId: tested!.id, contentHash: version.contentHash, warnings: evaluation.warnings.map(w => ({ rule: w.rule, severity: w.severity })) }
+  const found = await findRoadTest(user, roadTestId)
+  const { profileId } = (await ProfileVersion.findByPk(found.versionId, { attributes: ['profileId'] }))!
+  const car = await Vehicle.findByPk(found.vehicleId, { include: [{ model: Platform, as: 'platform' }] })
+  requireKnownSettings(car?.platform?.schema, input.parameters)
+  const settings = await loadWorkshopSettings(user.workshopId)
+  const versionId = await useDatabase().transaction(async (transaction) => {
+    // The order sign-off locks in (profile, road test, version), so the two queue rather than deadlock.
+    const lock = transaction.LOCK.UPDATE
+    const profile = (await Profile.findByPk(profileId, { lock, transaction }))!
+    const rt = (await RoadTest.findByPk(roadTestId, { lock, transaction }))!
+    const tested = (await ProfileVersion.findByPk(rt.versionId, { lock, transaction }))!
+    requireOpen(user, rt, tested)
+    if (canonicalJson(input.parameters) === canonicalJson(tested.parameters)) {
+      throw createError({ statusCode: 400, message: `These are the settings of version ${tested.versionNo}: record only what changed at the roadside.`, data: { fields: [{ path: 'parameters', message: 'Nothing changed' }] } })
+    }
+    const draft = await insertVersion(transaction, user, {
+      profile, vehicleId: rt.vehicleId, parent: tested, parameters: input.parameters, rationale: input.rationale, origin: 'roadside', roadTestId: rt.id
     })
-    const engineers = (await peopleWithRole(user.workshopId, 'engineer', transaction)).filter(e => e.id !== user.id)
-    const car = carLabel(vehicle!)
-    await queueMail(transaction, engineers.map(e => ({
-      workshopId: user.workshopId, to: e.email, subject: `Review wanted: roadside change on ${car}, ${profile!.name} v${version.versionNo}`,
-      text: `${user.name} changed settings at the roadside during road test ${rt.id} of version ${tested!.versionNo} and recorded them as version ${version.versionNo}, which awaits your review.\n\nWhy: ${input.rationale}\n\n${absoluteUrl(`/versions/${version.id}`)}`
-    })))
-    return version
+    await submitLoaded(transaction, user, await loadVersion(user, draft.id, transaction), input.justifications, settings)
+    return draft.id
   })
-  return { id: created.id, profileId: created.profileId, versionNo: created.versionNo, parentVersionId: created.parentVersionId, state: created.state, origin: created.origin, roadTestId: created.roadTestId, contentHash: created.contentHash, warnings: evaluation.warnings }
+  return readVersion(user, versionId)
 }

@@ -1,8 +1,10 @@
 import type { Transaction } from 'sequelize'
-import { Platform, Profile, ProfileVersion, Review, User, Vehicle } from '../../models'
+import { Kit, Platform, Profile, ProfileVersion, Review, User, Vehicle } from '../../models'
+import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 import type { SignedIn } from '../guards/guards'
 import type { EvaluationSnapshot, ReviewView, VersionSummary } from '../../../shared/schemas/profile-views'
-import { versionStateLabels, type VersionState } from '../../../shared/schemas/version'
+import type { VersionState } from '../../../shared/schemas/version'
+import { failedPeopleRules, personRefusal, stateAfter, stateRefusal, type VersionAction } from '../../../shared/schemas/version-lifecycle'
 
 const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null)
 const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : null)
@@ -22,14 +24,17 @@ export function versionSummary(v: ProfileVersion & { reviews?: Review[] }): Vers
   return {
     id: v.id, profileId: v.profileId, versionNo: v.versionNo, parentVersionId: v.parentVersionId, state: v.state, origin: v.origin,
     author: person(v.author), rationale: v.rationale, dangerCount: dangerCountOf(v.evaluation),
-    submittedAt: iso(v.submittedAt), decidedAt: iso(v.decidedAt), createdAt: iso(v.createdAt)!, lastReview: last ? reviewView(last) : null
+    roadTestId: v.roadTestId ?? null, submittedAt: iso(v.submittedAt), decidedAt: iso(v.decidedAt), createdAt: iso(v.createdAt)!, lastReview: last ? reviewView(last) : null
   }
 }
 
 export const authorInclude = { model: User, as: 'author', attributes: ['id', 'name'] }
 export const reviewsInclude = { model: Review, as: 'reviews', include: [{ model: User, as: 'reviewer', attributes: ['id', 'name'] }] }
 
-export interface VersionContext { version: ProfileVersion, profile: Profile, vehicle: Vehicle, platform: Platform }
+// What a version is evaluated on and named by: a car, or a kit's baseline (its spec template).
+export interface VersionSubject { vehicleId: number | null, kitId: number | null, spec: VehicleSpec, name: string, shortName: string }
+export interface VersionContext { version: ProfileVersion, profile: Profile, vehicle: Vehicle | null, kit: Kit | null, platform: Platform, subject: VersionSubject }
+const withPlatform = [{ model: Platform, as: 'platform' }]
 
 // A version of the signed-in person's workshop with its profile, car and drive unit; anything else is 404.
 // With `lock`, the version row is locked FOR UPDATE first, so concurrent transitions queue behind it.
@@ -38,19 +43,23 @@ export async function loadVersion(user: SignedIn, id: number, transaction?: Tran
     where: { id, workshopId: user.workshopId }, transaction, ...(transaction ? { lock: transaction.LOCK.UPDATE } : {})
   })
   if (!version) throw createError({ statusCode: 404, message: 'No such version in this workshop.' })
-  const profile = await Profile.findByPk(version.profileId, { transaction, include: [{ model: Vehicle, as: 'vehicle', include: [{ model: Platform, as: 'platform' }, { model: User, as: 'owner', attributes: ['id', 'name'] }] }] })
-  const vehicle = (profile as Profile & { vehicle: Vehicle }).vehicle
-  return { version, profile: profile!, vehicle, platform: vehicle.platform! }
+  const profile = (await Profile.findByPk(version.profileId, { transaction }))!
+  const vehicle = profile.vehicleId ? await Vehicle.findByPk(profile.vehicleId, { transaction, include: [...withPlatform, { model: User, as: 'owner', attributes: ['id', 'name'] }] }) : null
+  const kit = vehicle ? null : await Kit.findByPk(profile.kitId!, { transaction, include: withPlatform })
+  const subject = vehicle
+    ? { vehicleId: vehicle.id, kitId: null, spec: vehicle.spec, name: `${vehicle.stockRef} (${vehicle.year} ${vehicle.make} ${vehicle.model})`, shortName: `${vehicle.stockRef} ${vehicle.make} ${vehicle.model}` }
+    : { vehicleId: null, kitId: kit!.id, spec: kit!.specTemplate, name: `the ${kit!.name} kit's baseline`, shortName: `Kit ${kit!.name} baseline` }
+  return { version, profile, vehicle, kit, platform: (vehicle ?? kit)!.platform!, subject }
 }
 
-// 409 naming the state the version is in, for every transition tried from the wrong one.
-export function assertVersionState(v: ProfileVersion, allowed: VersionState[], doing: string) {
+// Checks a change against the version lifecycle's table (docs/version-lifecycle.md): 403 naming the person
+// rule the actor fails, else 409 naming the state the version is in. Answers the state it moves to.
+export function requireTransition(v: ProfileVersion, action: VersionAction, user: SignedIn, driverId?: number): VersionState {
+  const failed = failedPeopleRules(action, { roles: user.roles, isAuthor: v.authorId === user.id, isDriver: driverId === user.id })
+  if (failed.length) throw createError({ statusCode: 403, message: personRefusal(action, failed[0]!) })
   const state = v.state as VersionState
-  if (allowed.includes(state)) return
-  throw createError({
-    statusCode: 409,
-    message: `Version ${v.versionNo} is ${state} (${versionStateLabels[state].toLowerCase()}); it cannot be ${doing}. Only a version that is ${allowed.join(' or ')} can.`,
-    data: { state }
-  })
+  const refusal = stateRefusal(action, state, v.versionNo)
+  if (refusal) throw createError({ statusCode: 409, message: refusal, data: { state } })
+  return stateAfter(action, state)
 }
 

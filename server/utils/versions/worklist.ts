@@ -1,12 +1,18 @@
 import { Op, literal } from 'sequelize'
-import { Profile, ProfileVersion, Vehicle, type Review } from '../../models'
+import { Kit, Profile, ProfileVersion, Vehicle, type Review } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { DraftWorkItem, EvaluationSnapshot, ReviewWorkItem } from '../../../shared/schemas/profile-views'
 import { reviewView, authorInclude, reviewsInclude } from './views'
 
-const carInclude = { model: Profile, as: 'profile', attributes: ['id', 'name'], include: [{ model: Vehicle, as: 'vehicle', attributes: ['id', 'stockRef', 'make', 'model', 'year'] }] }
-type WithCar = ProfileVersion & { profile: Profile & { vehicle: Vehicle } }
-const car = (v: WithCar) => ({ id: v.profile.vehicle.id, stockRef: v.profile.vehicle.stockRef, make: v.profile.vehicle.make, model: v.profile.vehicle.model, year: v.profile.vehicle.year })
+// The car a version is for, or the kit whose baseline it is.
+const carInclude = { model: Profile, as: 'profile', attributes: ['id', 'name'], include: [
+  { model: Vehicle, as: 'vehicle', attributes: ['id', 'stockRef', 'make', 'model', 'year'] }, { model: Kit, as: 'kit', attributes: ['id', 'name'] }
+] }
+type WithCar = ProfileVersion & { profile: Profile & { vehicle: Vehicle | null, kit: Kit | null } }
+const car = ({ profile: { vehicle: c, kit } }: WithCar) => ({
+  vehicle: c ? { id: c.id, stockRef: c.stockRef, make: c.make, model: c.model, year: c.year } : null,
+  kit: kit ? { id: kit.id, name: kit.name } : null
+})
 
 // What waits for an engineer: versions in review, oldest first, with what the evaluation flagged.
 export async function reviewWorklist(user: SignedIn): Promise<{ items: ReviewWorkItem[], total: number }> {
@@ -18,7 +24,7 @@ export async function reviewWorklist(user: SignedIn): Promise<{ items: ReviewWor
   const items = rows.map((v) => {
     const warnings = (v.evaluation as EvaluationSnapshot | null)?.warnings ?? []
     return {
-      versionId: v.id, versionNo: v.versionNo, profileName: v.profile.name, vehicle: car(v),
+      versionId: v.id, versionNo: v.versionNo, profileName: v.profile.name, ...car(v),
       author: v.author ? { id: v.author.id, name: v.author.name } : null, submittedAt: v.submittedAt ? v.submittedAt.toISOString() : null,
       dangerCount: warnings.filter(w => w.severity === 'danger').length, cautionCount: warnings.filter(w => w.severity === 'caution').length,
       ownVersion: v.authorId === user.id
@@ -38,7 +44,7 @@ export async function draftWorklist(user: SignedIn): Promise<{ items: DraftWorkI
   const items = rows.map((v) => {
     const last = [...(v.reviews ?? [])].sort((a, b) => a.id - b.id).at(-1)
     return {
-      versionId: v.id, versionNo: v.versionNo, profileName: v.profile.name, state: v.state, vehicle: car(v),
+      versionId: v.id, versionNo: v.versionNo, profileName: v.profile.name, state: v.state, ...car(v),
       updatedAt: v.updatedAt.toISOString(), review: last ? reviewView(last) : null
     }
   })

@@ -6,6 +6,7 @@ import { zodFieldErrors } from '../guards/validate'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { settingsOf } from '../platforms/evaluation'
+import { startRecheck } from '../fleet/recheck-start'
 
 export interface WorkshopView { id: number, name: string, settings: WorkshopSettings }
 
@@ -50,6 +51,9 @@ export async function updateWorkshopSettings(admin: SignedIn, change: Json): Pro
     // The settings before, beside the patch: the workshop has no creation event for the history to fold from.
     if (patch.length) {
       await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'workshop.settings-changed', entityType: 'workshop', entityId: w.id, data: { patch, before } })
+      // A threshold the rules read changed: every car's on-car settings are checked again (units are only display).
+      const thresholds = patch.filter(op => !op.path.startsWith('/units'))
+      if (thresholds.length) await startRecheck(transaction, admin.workshopId, 'thresholds', { patch: thresholds }, admin.id)
     }
     return { id: w.id, name: w.name, settings: after }
   })

@@ -1,5 +1,7 @@
+import { routePermission } from '../../../../shared/schemas/version-lifecycle'
+
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const user = await requirePermission(event, 'road-tests.record')
+  const user = await requirePermission(event, routePermission('sign-off'))
   return signOffRoadTest(user, id)
 })

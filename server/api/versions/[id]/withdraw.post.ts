@@ -1,5 +1,7 @@
+import { routePermission } from '../../../../shared/schemas/version-lifecycle'
+
 export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
-  const user = await requirePermission(event, 'versions.write')
+  const user = await requirePermission(event, routePermission('withdraw'))
   return withdrawVersion(user, id)
 })

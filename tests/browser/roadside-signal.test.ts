@@ -1,0 +1,91 @@
+import { describe, it, expect, afterAll } from 'vitest'
+import type { Page } from 'playwright-core'
+import { launch, baseUrl, shot } from './helpers'
+import { passTheRest, recordConditions, recordHillStart, recordLiftOff } from './steps'
+import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
+import { approvedVersion, newCar, newProfile } from '../api/road-test-fixtures'
+
+const JS_BUDGET = 120 * 1024 // compressed JavaScript for the road-test page, as sent over the wire
+
+async function fillTheWizard(page: Page) {
+  await recordConditions(page, { surface: 'Wet', ambientC: '9', route: 'Quarry Lane, no signal at the top' })
+  await recordHillStart(page, '16', '50')
+  await recordLiftOff(page, 'gentle')
+  await passTheRest(page)
+}
+
+describe('the road test at the roadside, with little or no signal', async () => {
+  await useRunningServer()
+  const tuner = await signIn('tuner@voltwright.test')
+  const tester = await signIn('tester@voltwright.test')
+  const car = await newCar(tuner, { model: 'No Signal Saloon' })
+  const profileId = await newProfile(car.id)
+  const { context, page } = await launch(390)
+  afterAll(() => context.close())
+  const roadTests = async () => (await tester.call('GET', `/api/vehicles/${car.id}/road-tests`)).body.items as { id: number }[]
+
+  it('loads the road-test page with less than 120 KiB of compressed JavaScript', async () => {
+    const versionId = await approvedVersion(profileId)
+    await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tester@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+    const sizes: Promise<number>[] = []
+    const onFinished = (req: import('playwright-core').Request) => {
+      if (req.resourceType() === 'script') sizes.push(req.sizes().then(s => s.responseBodySize))
+    }
+    const plain: string[] = [] // scripts sent without compression
+    const onResponse = (r: import('playwright-core').Response) => {
+      // Files under 1 KiB are not worth compressing and are sent as they are.
+      const size = Number(r.headers()['content-length'] ?? 0)
+      if (r.request().resourceType() === 'script' && size > 1024 && !/^(br|gzip)$/.test(r.headers()['content-encoding'] ?? '')) plain.push(r.url())
+    }
+    page.on('response', onResponse)
+    page.on('requestfinished', onFinished)
+    await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+    page.off('requestfinished', onFinished)
+    page.off('response', onResponse)
+    const bytes = (await Promise.all(sizes)).reduce((a, b) => a + b, 0)
+    console.log(`road-test page: ${sizes.length} scripts, ${(bytes / 1024).toFixed(1)} KiB transferred`)
+    expect(sizes.length).toBeGreaterThan(0)
+    expect(bytes).toBeLessThan(JS_BUDGET)
+    expect(plain).toEqual([])
+  })
+
+  it('keeps what was entered with no signal, through a closed tab, and sends it once the signal returns', async () => {
+    const versionId = await approvedVersion(profileId)
+    const before = (await roadTests()).length
+    const tab = await context.newPage()
+    await tab.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+    await fillTheWizard(tab)
+    await context.setOffline(true)
+    await tab.getByRole('button', { name: 'Save the road test' }).click()
+    await expect.poll(() => tab.locator('[data-unsent]').textContent()).toContain('No connection: the road test is kept on this phone')
+    await shot(tab, 'roadside-01-not-sent')
+    await tab.reload().catch(() => {}) // with no signal the page itself cannot load again
+    await tab.close() // the tester gives up and closes the tab; the record waits on the phone
+    expect((await roadTests()).length).toBe(before)
+    await context.setOffline(false)
+    await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+    await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))
+    expect((await roadTests()).length).toBe(before + 1)
+    expect(await page.evaluate(id => localStorage.getItem(`voltwright:road-test:${id}`), versionId)).toBeNull()
+  })
+
+  it('records a road test once when the answer to a send is lost and the send is repeated', async () => {
+    const versionId = await approvedVersion(profileId)
+    const before = (await roadTests()).length
+    await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+    await fillTheWizard(page)
+    // The server records it, but the answer never reaches the phone.
+    await page.route('**/api/versions/*/road-tests', async (route) => {
+      await route.fetch()
+      await route.abort('internetdisconnected')
+    })
+    await page.getByRole('button', { name: 'Save the road test' }).click()
+    await expect.poll(async () => (await roadTests()).length).toBe(before + 1)
+    await expect.poll(() => page.locator('[data-unsent]').count()).toBe(1)
+    await page.unroute('**/api/versions/*/road-tests')
+    await page.reload({ waitUntil: 'networkidle' })
+    await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))
+    expect((await roadTests()).length).toBe(before + 1)
+    await shot(page, 'roadside-02-sent-once')
+  })
+})

@@ -1,0 +1,119 @@
+import { describe, it, expect, afterAll } from 'vitest'
+import type { Page } from 'playwright-core'
+import { launch, baseUrl, shot } from './helpers'
+import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
+import { newCar } from '../api/road-test-fixtures'
+
+// What each of the workshop's people opens in a day; the car and version are made here, with a long unbroken rationale.
+const tabs = ['versions', 'road-tests', 'snags', 'readbacks', 'history']
+function pagesFor(carId: number, versionId: number, ownCarId: number): Record<string, string[]> {
+  return {
+    'tuner@voltwright.test': ['/', '/cars', `/cars/${carId}`, `/versions/${versionId}`, '/snags'],
+    'engineer@voltwright.test': ['/', '/activity', `/cars/${carId}`, `/versions/${versionId}`],
+    'tester@voltwright.test': ['/', '/cars', `/cars/${carId}`, ...tabs.map(t => `/cars/${carId}/${t}`), '/snags'],
+    'auditor@voltwright.test': ['/', '/activity', `/cars/${carId}`, `/cars/${carId}/history`],
+    'admin@voltwright.test': ['/', '/admin/people', '/admin/workshop', '/admin/platforms', '/activity'],
+    'client@voltwright.test': ['/', `/my-cars/${ownCarId}`]
+  }
+}
+
+const sideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)
+
+// The history as a person reads it: each event with the part for auditors folded away.
+const historyText = (page: Page) => page.locator('main ol > li').evaluateAll((items) => {
+  document.querySelectorAll('main details').forEach((d) => { (d as HTMLDetailsElement).open = false })
+  return items.map(li => (li as HTMLElement).innerText).join('\n')
+})
+
+describe('every main page fits the screen, as each of its people sees it', async () => {
+  await useRunningServer()
+  const tuner = await signIn('tuner@voltwright.test')
+  const car = await newCar(tuner, { model: 'Wide Value Saloon' })
+  const rationale = 'x'.repeat(4000) // a pasted value with nowhere to break
+  const created = await tuner.call('POST', `/api/vehicles/${car.id}/profiles`, { name: 'Road', rationale })
+  expect(created.status).toBe(201)
+  const client = await signIn('client@voltwright.test')
+  const ownCarId = (await client.call('GET', '/api/vehicles')).body.items[0].id as number
+  const pages = pagesFor(car.id, created.body.id, ownCarId)
+
+  for (const width of [390, 1280]) {
+    describe(`at ${width} px`, async () => {
+      const { context, page } = await launch(width)
+      afterAll(() => context.close())
+
+      it.each(Object.keys(pages))('%s: no page scrolls sideways', async (email) => {
+        await context.clearCookies()
+        const login = await page.request.post(`${baseUrl}/api/auth/login`, { data: { email, password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+        expect(login.ok()).toBe(true)
+        const wide: string[] = []
+        for (const path of pages[email]!) {
+          await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
+          const extra = await sideways(page)
+          if (extra > 0) wide.push(`${path}: ${extra} px too wide`)
+        }
+        expect(wide).toEqual([])
+      })
+    })
+  }
+
+  it('reads the history in words: no field names, no JSON, no long decimals', async () => {
+    const { context, page } = await launch(1280)
+    try {
+      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'auditor@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      for (const path of ['/activity', `/cars/${car.id}/history`]) {
+        await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
+        await expect.poll(() => page.locator('main ol > li').count()).toBeGreaterThan(0)
+        const text = await historyText(page)
+        expect(text).toContain('drafted Road v1')
+        expect(text.match(/\b(?!kWh?\b)[a-z]+[A-Z][A-Za-z]*\b/)?.[0], `a field name on ${path}`).toBeUndefined()
+        expect(text.match(/.{0,20}[{[].{0,20}/)?.[0], `JSON on ${path}`).toBeUndefined()
+        expect(text.match(/\d\.\d{5,}/)?.[0], `a long decimal on ${path}`).toBeUndefined()
+        expect(text).not.toMatch(/[0-9a-f]{64}/)
+      }
+      await shot(page, 'screens-01-history-print')
+    } finally {
+      await context.close()
+    }
+  })
+
+  it('says what is wrong with a road-test link, and why a photo is refused', async () => {
+    const { context, page } = await launch(390)
+    try {
+      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tester@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      for (const [path, words] of [['/road-tests/new', 'does not say which version'], ['/road-tests/new?versionId=abc', 'does not exist'], ['/road-tests/new?versionId=999999', 'Back to the bench']] as const) {
+        await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
+        await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Nothing to road-test here' }).count(), path).toBe(1)
+        expect(await page.getByRole('alert').textContent()).toContain(words)
+      }
+      await page.goto(`${baseUrl}/road-tests/new?version=${created.body.id}`, { waitUntil: 'networkidle' })
+      await expect.poll(() => page.getByText(/not approved; the record cannot be saved/).count()).toBe(1)
+      await page.getByRole('button', { name: 'Start the checks' }).click()
+      await page.locator('input[type=file]').setInputFiles({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') })
+      await expect.poll(() => page.getByRole('alert').filter({ hasText: 'notes.txt was not added: only JPEG, PNG or WebP photos' }).count()).toBe(1)
+      await shot(page, 'screens-02-photo-refused')
+    } finally {
+      await context.close()
+    }
+  })
+
+  it('opens a car on an overview that fits two screens, each part a tab of its own reachable by URL', async () => {
+    const { context, page } = await launch(1280)
+    try {
+      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tuner@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      const demo = (await tuner.call('GET', '/api/vehicles?q=OF-104')).body.items[0] as { id: number }
+      await page.goto(`${baseUrl}/cars/${demo.id}`, { waitUntil: 'networkidle' })
+      await expect.poll(() => page.locator('[data-on-car]').count()).toBeGreaterThan(0)
+      expect(await page.evaluate(() => document.documentElement.scrollHeight)).toBeLessThanOrEqual(2 * 900)
+      await shot(page, 'screens-03-car-overview')
+      const nav = page.getByRole('navigation', { name: 'The car\'s pages' })
+      for (const [label, path, heading] of [['Settings and versions', 'versions', /profiles/i], ['Road tests', 'road-tests', /Road tests/], ['Snags', 'snags', /Snag list/], ['Read-backs', 'readbacks', /read-back/i], ['History', 'history', /History/]] as const) {
+        await nav.getByRole('link', { name: label }).click()
+        await page.waitForURL(u => u.pathname === `/cars/${demo.id}/${path}`)
+        await expect.poll(() => page.getByRole('heading', { level: 2, name: heading }).count(), label).toBeGreaterThan(0)
+        expect(await nav.getByRole('link', { name: label }).getAttribute('aria-current')).toBe('page')
+      }
+    } finally {
+      await context.close()
+    }
+  })
+})

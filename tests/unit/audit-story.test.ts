@@ -1,0 +1,90 @@
+import { readFileSync, readdirSync, statSync } from 'node:fs'
+import { join } from 'node:path'
+import { describe, it, expect } from 'vitest'
+import { eventStory, type EventStory } from '../../shared/utils/audit-story'
+import { auditActionLabels } from '../../shared/utils/audit-actions'
+import { entryOf, legacySamples, samples } from './audit-story-fixtures'
+
+// Every action the product writes, read from its writers: each `action:` of an audit event in server/ and seeders/.
+function writtenActions(): Set<string> {
+  const found = new Set<string>()
+  const walk = (dir: string): string[] => readdirSync(dir).flatMap((f) => {
+    const p = join(dir, f)
+    return statSync(p).isDirectory() ? walk(p) : p.endsWith('.ts') ? [p] : []
+  })
+  for (const file of [...walk('server'), ...walk('seeders')]) {
+    const text = readFileSync(file, 'utf8')
+    if (!text.includes('appendAuditEvent')) continue
+    for (const m of text.matchAll(/\baction: ([^\n]*?)(?:, entityType|,\s*$)/gm)) {
+      expect(m[1], `${file}: an action written other than as quoted names`).not.toMatch(/`/)
+      for (const q of m[1]!.matchAll(/'([a-z-]+\.[a-z-]+)'/g)) found.add(q[1]!)
+    }
+  }
+  return found
+}
+
+// What a person sees of an event: everything but the part folded away for auditors.
+const visible = (s: EventStory) => [s.sentence, ...s.facts.flatMap(f => [f.label, f.value]), ...s.checks.flatMap(c => [c.title, c.verdict, c.measured]),
+  ...s.changes.flatMap(c => [c.label, c.before ?? 'not recorded', c.after])].join('\n')
+
+const CAMEL = /\b(?!kWh?\b)[a-z]+[A-Z][A-Za-z]*\b/ // a field name; kW and kWh are units
+const TOO_PRECISE = /\d\.\d{5,}/
+
+describe('the history in the workshop\'s words', () => {
+  const written = writtenActions()
+
+  it('finds the actions the product writes, and has words and a sample for each', () => {
+    expect(written.size).toBeGreaterThan(20)
+    for (const action of written) {
+      expect(auditActionLabels[action], `${action} has no label`).toBeTruthy()
+      expect(samples[action], `${action} has no sample in tests/unit/audit-story-fixtures.ts`).toBeTruthy()
+    }
+  })
+
+  it.each([...Object.entries(samples), ...Object.entries(legacySamples)])('%s reads as words: no field names, no JSON, no long decimals, no hashes', (action, sample) => {
+    const entry = entryOf(action, sample)
+    const story = eventStory(entry)
+    const text = visible(story)
+    expect(story.sentence).toMatch(/^[A-Z].*\.$/s)
+    expect(text.match(CAMEL)?.[0], 'a field name').toBeUndefined()
+    expect(text.match(/.{0,20}[{[].{0,20}/)?.[0], 'JSON').toBeUndefined()
+    expect(text.match(TOO_PRECISE)?.[0], 'a long decimal').toBeUndefined()
+    expect(text).not.toContain(entry.hash)
+    expect(text).not.toContain(action)
+    const auditors = story.auditors.map(r => `${r.label} ${r.value}`).join('\n')
+    expect(auditors).toContain(entry.hash)
+    expect(auditors).toContain(entry.prevHash)
+    expect(auditors).toContain(`Event ${entry.id}`)
+  })
+
+  it('tells a sign-off with its people, version, stage and open snags', () => {
+    expect(eventStory(entryOf('version.signed-off', samples['version.signed-off']!)).sentence)
+      .toBe('Sol Brannagh signed Road v12 off onto the car; the car moved from road testing to snagging with 3 snags open; it replaces Road v11.')
+  })
+
+  it('rounds a road test\'s figures as the trade writes them, with units, and lists its checks', () => {
+    const rt = eventStory(entryOf('road-test.recorded', samples['road-test.recorded']!))
+    expect(rt.sentence).toBe('Sol Brannagh recorded a road test of Road v12: failed.')
+    expect(rt.facts).toContainEqual({ label: 'Conditions', value: 'Wet, 9 °C, Forge loop, Quarry Lane (18 %)' })
+    expect(rt.checks).toContainEqual({ title: 'Lift-off regen', verdict: 'Pass', measured: 'Deceleration 1.20 m/s², Feel firm' })
+    expect(rt.checks).toContainEqual({ title: 'Full-power pull', verdict: 'Fail', measured: 'Speed reached 104 km/h, 0–50 km/h 4.1 s' })
+    const log = eventStory(entryOf('road-test.telemetry-uploaded', samples['road-test.telemetry-uploaded']!))
+    expect(log.facts).toContainEqual({ label: 'Energy recovered by regen', value: '134 Wh' })
+    expect(log.facts).toContainEqual({ label: 'Strongest lift-off slowing (0.5 s mean)', value: '1.20 m/s²' })
+    expect(log.facts).toContainEqual({ label: 'Size', value: '2.2 MiB' })
+  })
+
+  it('shows each change as before → after, with the parent\'s value for a version drafted from it', () => {
+    const drafted = eventStory(entryOf('version.created', samples['version.created']!))
+    expect(drafted.sentence).toBe('Sol Brannagh drafted Road v12 from Road v11.')
+    expect(drafted.changes).toContainEqual({ label: 'Power cap, kW', before: '80', after: '85.3', removed: false })
+    expect(drafted.changes).toContainEqual({ label: 'Creep speed, km/h', before: '5', after: 'removed', removed: true })
+    const snag = eventStory(entryOf('snag.updated', samples['snag.updated']!))
+    expect(snag.changes).toEqual([
+      { label: 'Status', before: 'Open', after: 'In hand', removed: false },
+      { label: 'Assigned to (person no.)', before: null, after: 'Ada Penhallow', removed: false }
+    ])
+    const diff = eventStory(entryOf('readback.differs', samples['readback.differs']!))
+    expect(diff.facts.find(f => f.label === 'Differences')!.value).toBe('Power cap: 85 kW signed off, 92.3 kW found; Unknown setting: none signed off, 4 found')
+  })
+})
