@@ -32,6 +32,8 @@ describe('the workshop\'s fleet', async () => {
     await page.locator('#spec-kerbMassKg').fill('940')
     await page.getByRole('button', { name: 'Book in the car' }).click()
     await page.waitForURL(/\/cars\/\d+$/)
+    // The kit and its baseline are shown with the car's profiles, on the settings and versions tab.
+    await page.getByRole('link', { name: 'Settings and versions' }).click()
     await expect.poll(() => page.locator('[data-baseline-of]').textContent()).toContain('Built from the Forge RD-45 small rear-drive kit, on its baseline version 2')
     expect(await page.locator('[data-baseline-of]').textContent()).toContain('This car\'s settings are the baseline\'s')
   })
@@ -40,6 +42,7 @@ describe('the workshop\'s fleet', async () => {
     const page = tuner.page
     await page.goto(`${baseUrl}/cars`, { waitUntil: 'networkidle' })
     await page.getByRole('link', { name: 'OF-107' }).click()
+    await page.getByRole('link', { name: 'Settings and versions' }).click()
     await expect.poll(() => page.locator('[data-baseline-of]').textContent()).toContain('The kit\'s baseline moved: version 2 is approved.')
     await page.getByRole('button', { name: /Show the departures/ }).click()
     await expect.poll(() => page.getByRole('region', { name: /Where this car departs from the baseline/ }).textContent()).toContain('Power cap')
