@@ -11,6 +11,7 @@ import { changePathLabel } from './audit-actions'
 import { bytesText, keyLabel, numberText, stageWords, unitOf, valueText, wordsOf } from './audit-values'
 import { knownChangeLabel } from './change-labels'
 import { auditorRows, isAuditorKey } from './audit-auditors'
+import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
 
 export interface StoryRow { label: string, value: string }
 export interface StoryCheck { title: string, verdict: string, measured: string }
@@ -126,7 +127,9 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
     } else if (k === 'width' || k === 'height') {
       if (k === 'width' && num(d.height)) add('Picture', `${v} × ${d.height} px`)
     } else if (k === 'reason' || k === 'comment' || k === 'caption' || k === 'rationale') {
-      if (v !== '') add({ reason: 'Reason', comment: 'Comment', caption: 'Caption', rationale: 'Why' }[k], valueText(v))
+      // A fleet re-check's reason is a code: said in words, capitalised.
+      const words = e.action === 'fleet.rechecked' && k === 'reason' ? recheckReasonLabels[v as RecheckReason] : undefined
+      if (v !== '') add({ reason: 'Reason', comment: 'Comment', caption: 'Caption', rationale: 'Why' }[k], words ? `${words[0]!.toUpperCase()}${words.slice(1)}` : valueText(v))
     } else if (k === 'source') add('Came in as', valueText(v, 'source'))
     else if (k === 'readAt') add('Read from the controller', valueText(v))
     else if (k === 'origin') add('Made', valueText(v, 'origin'))

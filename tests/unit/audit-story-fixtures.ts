@@ -48,7 +48,7 @@ export const samples: Record<string, Sample> = {
   'workshop-check.changed': { entityType: 'workshop-check', data: { before: { label: 'Heater and demister', required: false }, after: { label: 'Heater and demister', required: true } } },
   'kit.created': { entityType: 'kit', data: { after: { name: 'Tregarth Minim rear-drive kit', platformKey: platforms[0]!.key, fits: [{ make: 'Tregarth', model: 'Minim', yearFrom: 1959, yearTo: 1969 }], specTemplate: { kerbMassKg: 640, drivenAxle: 'rear' } } } },
   'kit.updated': { entityType: 'kit', data: { patch: [{ op: 'replace', path: '/name', value: 'Tregarth Minim kit, mark 2' }] } },
-  'fleet.rechecked': { entityType: 'version', data: { recheckId: 4, reason: 'The workshop’s thresholds changed', versionNo: 12, result: 'new warnings', newWarnings: [{ rule: 'regen-grip-snow', severity: 'danger' }] }, names: { version: 'Road v12' } },
+  'fleet.rechecked': { entityType: 'version', data: { recheckId: 4, reason: 'thresholds', versionNo: 12, result: 'new warnings', newWarnings: [{ rule: 'regen-grip-snow', severity: 'danger' }] }, names: { version: 'Road v12' } },
   'platform.created': { entityType: 'platform', data: { after: { key: platforms[0]!.key, name: platforms[0]!.name, motorMaxRpm: 9000, schema: platforms[0]!.schema } } }
 }
 
