@@ -23,8 +23,11 @@ const step = async (name, fn, part) => {
   console.log(`\n[voltwright test] ${name}`)
   await fn()
 }
-// VOLTWRIGHT_API_FILES="route-guards bad-input" runs only those API test files (while working on them).
-const apiFiles = (process.env.VOLTWRIGHT_API_FILES ?? '').split(/\s+/).filter(Boolean)
+// VOLTWRIGHT_API_FILES="route-guards bad-input" runs only those API test files (while working on them);
+// VOLTWRIGHT_BROWSER_FILES does the same for the browser tests.
+const filesFrom = (name) => (process.env[name] ?? '').split(/\s+/).filter(Boolean)
+const apiFiles = filesFrom('VOLTWRIGHT_API_FILES')
+const browserFiles = filesFrom('VOLTWRIGHT_BROWSER_FILES')
 const bin = (name) => join(root, 'node_modules', '.bin', name)
 
 function stopRestarted(dir) {
@@ -62,7 +65,7 @@ try {
     VOLTWRIGHT_SECOND_PORT: process.env.SECOND_PORT || String(config.port + 1)
   }
   await step('API tests', () => { ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'api', ...apiFiles], { cwd: root, env: testEnv }) }, 'api')
-  await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'browser'], { cwd: root, env: testEnv }) }, 'browser')
+  await step('browser tests', () => { testEnv.CHROMIUM_PATH = ensureChromium(); ensurePoppler(); return runAsync(bin('vitest'), ['run', '--project', 'browser', ...browserFiles], { cwd: root, env: testEnv }) }, 'browser')
   console.log('\n[voltwright test] all passed')
   await shutdown(0)
 } catch (e) {

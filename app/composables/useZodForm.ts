@@ -28,5 +28,22 @@ export function useZodForm<S extends z.ZodType>(schema: S) {
     formMessage.value = e.message ?? 'The change could not be saved.'
   }
 
-  return { errors, formMessage, validate, fromServer }
+  // Checks the value, then sends it: `saving` while it goes, a refusal shown by field. Answers what the send
+  // answered, or undefined when the value or the server refused it.
+  const saving = ref(false)
+  async function submit<T>(value: unknown, send: (input: z.output<S>) => Promise<T>): Promise<T | undefined> {
+    const input = validate(value)
+    if (!input || saving.value) return undefined
+    saving.value = true
+    try {
+      return await send(input)
+    } catch (e) {
+      fromServer(e)
+      return undefined
+    } finally {
+      saving.value = false
+    }
+  }
+
+  return { errors, formMessage, validate, fromServer, saving, submit }
 }

@@ -4,7 +4,7 @@ import { settingKind, type LooseProperty } from '~~/shared/compute/setting-kinds
 import type { Role } from '~~/shared/compute/roles'
 
 export interface ParameterGroup { id: string, title: string, roles: readonly Role[] }
-export interface SettingGroup { id: string, title: string, names: string[] }
+export interface TuneGroup { id: string, title: string, names: string[] }
 
 export const parameterGroups: readonly ParameterGroup[] = [
   { id: 'drive', title: 'Drive', roles: ['powerCap', 'torqueCap', 'throttleProgression', 'speedLimit', 'reverseSpeedLimit'] },
@@ -15,7 +15,7 @@ export const parameterGroups: readonly ParameterGroup[] = [
 ]
 
 // The schema's settings in their groups, each group in role order; empty groups are left out.
-export function groupSettings(properties: Record<string, LooseProperty>): SettingGroup[] {
+export function groupSettings(properties: Record<string, LooseProperty>): TuneGroup[] {
   const byRole = new Map<string, string>()
   for (const [name, p] of Object.entries(properties)) if (typeof p?.['x-role'] === 'string' && !byRole.has(p['x-role'])) byRole.set(p['x-role'], name)
   const groups = parameterGroups

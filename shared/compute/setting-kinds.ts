@@ -114,12 +114,14 @@ export function fitsKind(p: LooseProperty, v: unknown): boolean {
   return Array.isArray(v)
 }
 
-// Settings a drive unit does not have, or values of another kind, as fields for a 400; a value out of range
-// is kept (a draft may hold it; it shows as a hard error and blocks submission).
-export function foreignSettings(schema: unknown, values: Record<string, unknown>, prefix = 'parameters'): { path: string, message: string }[] {
+// Settings a drive unit does not have (their names, each cut to 60 characters, at most 20 of them), and
+// values of another kind than their setting holds; a value out of range is not foreign (a draft may hold it;
+// it shows as a hard error and blocks submission).
+export function foreignSettings(schema: unknown, values: Record<string, unknown>): { unknown: string[], wrongKind: { name: string, message: string }[] } {
   const props = ((schema as { properties?: Record<string, LooseProperty> } | null)?.properties ?? {})
-  return Object.entries(values).flatMap(([k, v]) => {
-    if (!Object.hasOwn(props, k)) return [{ path: `${prefix}.${k}`, message: 'Not a setting this controller has' }]
-    return fitsKind(props[k]!, v) ? [] : [{ path: `${prefix}.${k}`, message: `Not a value ${label(props[k], k)} can hold` }]
-  })
+  const names = Object.keys(values)
+  const unknown = names.filter(k => !Object.hasOwn(props, k)).slice(0, 20).map(k => k.slice(0, 60))
+  const wrongKind = names.filter(k => Object.hasOwn(props, k) && !fitsKind(props[k]!, values[k]))
+    .map(k => ({ name: k, message: `Not a value ${label(props[k], k)} can hold` }))
+  return { unknown, wrongKind }
 }

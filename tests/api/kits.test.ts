@@ -48,6 +48,18 @@ describe('conversion kits and their baseline', async () => {
     expect(events).toEqual([{ action: 'kit.created', vehicleId: null }])
   })
 
+  it('checks a new baseline version\'s settings against the kit\'s drive unit, as a car\'s are checked against the car\'s', async () => {
+    const kit = await newKit(tuner)
+    const path = `/api/profiles/${kit.baselineProfileId}/versions`
+    const wrongKind = await tuner.call('POST', path, { parameters: { ...baselineSettings, powerCapKw: 'forty' } })
+    expect(wrongKind.status).toBe(400)
+    expect(wrongKind.body.data.fields).toEqual([{ path: 'parameters.powerCapKw', message: expect.stringContaining('can hold') }])
+    const stranger = await tuner.call('POST', path, { parameters: { ...baselineSettings, boostKw: 20 } })
+    expect(stranger.status).toBe(400)
+    expect(stranger.body.data.unknown).toEqual(['boostKw'])
+    expect((await tuner.call('POST', path, { parameters: { ...baselineSettings, powerCapKw: 42 } })).status).toBe(201)
+  })
+
   it('refuses a kit whose fits run backwards or whose name is taken, and edits name, fits and template', async () => {
     const kit = await newKit(tuner)
     const backwards = await tuner.call('POST', '/api/kits', { name: 'Backwards', platformKey: 'fenlow-45', specTemplate: testSpec, fits: [{ make: 'A', model: 'B', yearFrom: 1970, yearTo: 1960 }] })

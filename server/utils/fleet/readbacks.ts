@@ -4,8 +4,7 @@ import type { SignedIn } from '../guards/guards'
 import type { OnCarProfile, ReadbackBody, ReadbackDifference, ReadbackView } from '../../../shared/schemas/readback'
 import { compareReadback, withWords } from '../../../shared/utils/readback-compare'
 import { schemaProperties } from '../../../shared/compute/parameter-input'
-import { fitsKind } from '../../../shared/compute/setting-kinds'
-import { settingLabel } from '../../../shared/utils/setting-words'
+import { requireKnownSettings } from '../platforms/settings-check'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
 import { queueMail, peopleWithRole, absoluteUrl } from '../mail/outbox'
@@ -53,15 +52,8 @@ async function profileFor(vehicle: Vehicle, body: ReadbackBody) {
 // Every setting read must be one the drive unit has, and of its kind (a number for a number, and so on);
 // a value outside the range is what the controller holds, so it is recorded and shows as a difference.
 function checkParameters(vehicle: Vehicle, found: Record<string, unknown>, prefix: string) {
-  const known = schemaProperties(vehicle.platform?.schema)
-  const fields = Object.entries(found).flatMap(([k, v]) => {
-    if (!Object.hasOwn(known, k)) return [{ path: `${prefix}.${k}`, message: `Not a parameter of the ${vehicle.platform?.name ?? 'car\'s'} drive unit` }]
-    return fitsKind(known[k]!, v) ? [] : [{ path: `${prefix}.${k}`, message: `Not a value ${settingLabel(known[k], k)} can hold` }]
-  })
-  if (fields.length) {
-    throw createError({ statusCode: 400, message: `Please check: ${fields.map(f => f.path).join(', ')} (not parameters of this drive unit, or not values they can hold)`, data: { fields } })
-  }
-  return known
+  requireKnownSettings(vehicle.platform, found, { prefix })
+  return schemaProperties(vehicle.platform?.schema)
 }
 
 

@@ -4,7 +4,8 @@ import type { EvaluateRequest } from '../../../shared/schemas/evaluate'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 import { selectRows } from '../database/db'
 import { type SignedIn, requireUser, vehicleScopeSql } from '../guards/guards'
-import { assertKnownSettings, settingsOf, evaluateOnServer } from './evaluation'
+import { settingsOf, evaluateOnServer } from './evaluation'
+import { requireKnownSettings } from './settings-check'
 import { findWorkshopPlatform } from './platforms'
 
 interface CarRow { spec: VehicleSpec | null, key: string | null, name: string, motorMaxRpm: number, torqueConstantNmPerA: number | null, schema: unknown, settings: Record<string, unknown> | null }
@@ -32,6 +33,6 @@ export async function evaluateRequest(event: H3Event, input: EvaluateRequest): P
   if (!platform) {
     throw createError({ statusCode: 400, message: `Unknown drive unit "${input.platformKey}".`, data: { fields: [{ path: 'platformKey', message: 'Unknown drive unit' }] } })
   }
-  assertKnownSettings(platform, input.parameters)
+  requireKnownSettings(platform, input.parameters, { kinds: false })
   return evaluateOnServer(spec ?? input.spec!, platform, input.parameters, settings)
 }

@@ -22,16 +22,6 @@ function ajvPath(e: ErrorObject): string {
   return name ? `parameters.${name}` : 'parameters'
 }
 
-// Settings the drive unit's schema does not define are refused outright where they come in (evaluate, read-backs),
-// before any check of their values.
-export function assertKnownSettings(platform: PlatformLike, parameters: Record<string, unknown>, prefix = 'parameters') {
-  const unknown = unknownSettings(platform.schema, Object.keys(parameters))
-  if (!unknown.length) return
-  const names = unknown.slice(0, 20).map(n => n.slice(0, 60))
-  const fields = names.map(n => ({ path: `${prefix}.${n}`, message: `Not a setting of the ${platform.name}` }))
-  throw createError({ statusCode: 400, message: `Not settings of the ${platform.name}: ${names.join(', ')}`.slice(0, 500), data: { fields, unknown: names } })
-}
-
 // The server's evaluation: the shared computation, plus the platform's JSON Schema checked by ajv
 // (compiled once per platform). A field evaluate already flagged is not reported twice. Settings the schema does
 // not define (in data stored before they were refused) are reported as errors and never reach ajv.

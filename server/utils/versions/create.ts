@@ -1,6 +1,7 @@
-import { requireKnownSettings } from './settings-check'
 import type { Transaction } from 'sequelize'
-import { Platform, Profile, ProfileVersion, Vehicle } from '../../models'
+import type { Vehicle } from '../../models';
+import { Profile, ProfileVersion } from '../../models'
+import { requireKnownSettings } from '../platforms/settings-check'
 import type { SignedIn } from '../guards/guards'
 import { defaultParameters } from '../../../shared/platforms'
 import { jsonPatch } from '../../../shared/utils/json-patch'
@@ -10,7 +11,7 @@ import { appendAuditEvent } from '../history/audit'
 import { versionContentHash } from './content'
 import { insertVersion } from './insert'
 import { readVersion } from './read'
-import { loadVersion, requireTransition } from './views'
+import { loadVersion, platformOfProfile, requireTransition } from './views'
 
 // Two people naming a profile the same at the same moment: the unique index decides, the loser hears why.
 function sameNameRace(e: unknown): never {
@@ -29,7 +30,7 @@ export async function insertProfile(t: Transaction, user: SignedIn, owner: { veh
 }
 
 export async function createProfile(user: SignedIn, vehicle: Vehicle, input: ProfileCreate) {
-  requireKnownSettings(vehicle.platform?.schema, input.parameters)
+  requireKnownSettings(vehicle.platform, input.parameters)
   const parameters = input.parameters ?? defaultParameters(vehicle.platform!)
   const versionId = await useDatabase().transaction(async (t) => {
     const clash = await Profile.findOne({ where: { vehicleId: vehicle.id, name: input.name }, transaction: t })
@@ -46,7 +47,8 @@ export async function createProfile(user: SignedIn, vehicle: Vehicle, input: Pro
 export async function createVersion(user: SignedIn, profileId: number, input: VersionCreate, baselineVersionId?: number) {
   const profile = await Profile.findOne({ where: { id: profileId, workshopId: user.workshopId } })
   if (!profile) throw createError({ statusCode: 404, message: 'No such profile in this workshop.' })
-  if (input.parameters && profile.vehicleId) requireKnownSettings((await Vehicle.findByPk(profile.vehicleId, { include: [{ model: Platform, as: 'platform' }] }))?.platform?.schema, input.parameters)
+  // A kit's baseline is checked against the kit's drive unit, as a car's profile against the car's.
+  if (input.parameters) requireKnownSettings(await platformOfProfile(profile), input.parameters)
   const versionId = await useDatabase().transaction(async (t) => {
     const parent = input.fromVersionId
       ? await ProfileVersion.findOne({ where: { id: input.fromVersionId, profileId: profile.id }, transaction: t })
@@ -66,7 +68,7 @@ export async function updateDraft(user: SignedIn, id: number, input: VersionUpda
   await useDatabase().transaction(async (t) => {
     const { version: v, platform, subject } = await loadVersion(user, id, t)
     requireTransition(v, 'edit', user)
-    requireKnownSettings(platform.schema, input.parameters)
+    requireKnownSettings(platform, input.parameters)
     if (v.lockVersion !== input.lockVersion) {
       throw createError({
         statusCode: 409,

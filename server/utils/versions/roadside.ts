@@ -10,7 +10,7 @@ import { loadWorkshopSettings } from '../platforms/evaluation'
 import { findRoadTest } from '../road-tests/record'
 import { insertVersion } from './insert'
 import { readVersion } from './read'
-import { requireKnownSettings } from './settings-check'
+import { requireKnownSettings } from '../platforms/settings-check'
 import { submitLoaded } from './submit'
 import { loadVersion, requireTransition } from './views'
 
@@ -26,7 +26,7 @@ export async function recordRoadsideVersion(user: SignedIn, roadTestId: number, 
   const found = await findRoadTest(user, roadTestId)
   const { profileId } = (await ProfileVersion.findByPk(found.versionId, { attributes: ['profileId'] }))!
   const car = await Vehicle.findByPk(found.vehicleId, { include: [{ model: Platform, as: 'platform' }] })
-  requireKnownSettings(car?.platform?.schema, input.parameters)
+  requireKnownSettings(car?.platform, input.parameters)
   const settings = await loadWorkshopSettings(user.workshopId)
   const versionId = await useDatabase().transaction(async (transaction) => {
     // The order sign-off locks in (profile, road test, version), so the two queue rather than deadlock.

@@ -38,6 +38,14 @@ const withPlatform = [{ model: Platform, as: 'platform' }]
 
 // A version of the signed-in person's workshop with its profile, car and drive unit; anything else is 404.
 // With `lock`, the version row is locked FOR UPDATE first, so concurrent transitions queue behind it.
+// The drive unit a profile's versions are for: its car's, or its kit's for a kit's baseline.
+export async function platformOfProfile(profile: Profile, transaction?: Transaction): Promise<Platform | null> {
+  const owner = profile.vehicleId
+    ? await Vehicle.findByPk(profile.vehicleId, { transaction, include: withPlatform })
+    : await Kit.findByPk(profile.kitId!, { transaction, include: withPlatform })
+  return owner?.platform ?? null
+}
+
 export async function loadVersion(user: SignedIn, id: number, transaction?: Transaction): Promise<VersionContext> {
   const version = await ProfileVersion.findOne({
     where: { id, workshopId: user.workshopId }, transaction, ...(transaction ? { lock: transaction.LOCK.UPDATE } : {})
