@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { compileParameterValidator, createAjv, validatePlatform, validatePlatformSchema } from '../../shared/platforms/ajv'
+import { cachedValidatorCount, compileParameterValidator, createAjv, MAX_VALIDATORS, validatePlatform, validatePlatformSchema } from '../../shared/platforms/ajv'
 import { defaultParameters, marrick110, fenlow45, platforms } from '../../shared/platforms/index'
 
 const clone = <T>(x: T): T => structuredClone(x)
@@ -133,5 +133,22 @@ describe('compileParameterValidator', () => {
   it('knows the unit keyword in strict mode', () => {
     expect(() => createAjv().compile({ type: 'number', unit: 'kW' })).not.toThrow()
     expect(() => createAjv().compile({ type: 'number', unit: '' })).toThrow()
+  })
+})
+
+describe('compileParameterValidator', () => {
+  it('compiles a schema once, and keeps no more validators than its limit however many schemas come', () => {
+    const first = compileParameterValidator(fenlow45)
+    expect(compileParameterValidator(fenlow45)).toBe(first)
+    for (let i = 0; i < MAX_VALIDATORS + 40; i++) {
+      const s = clone(fenlow45.schema) as unknown as { properties: Record<string, Record<string, unknown>> }
+      s.properties.powerCapKw!.maximum = 100 + i
+      const validate = compileParameterValidator({ ...fenlow45, key: `uploaded-${i}`, schema: s as never })!
+      expect(validate({ ...defaultParameters(fenlow45), powerCapKw: 100 + i })).toBe(true)
+      expect(validate({ ...defaultParameters(fenlow45), powerCapKw: 101 + i })).toBe(false)
+    }
+    expect(cachedValidatorCount()).toBe(MAX_VALIDATORS)
+    // The least recently used was dropped and is compiled afresh when it is needed again.
+    expect(compileParameterValidator(fenlow45)).not.toBe(first)
   })
 })
