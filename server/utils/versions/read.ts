@@ -35,8 +35,12 @@ export async function readVersion(user: SignedIn, id: number): Promise<VersionVi
   ])
   v.author = author ?? undefined
   const { lastReview: _last, ...summary } = versionSummary(v)
+  // People as the history named them when they acted, so renaming someone later does not rewrite this page.
+  const asRecorded = (e: HistoryEntry | undefined, today: { id: number, name: string } | null) => (e?.actor?.name ? e.actor : today)
+  const decisions = history.filter(h => h.action === 'version.approved' || h.action === 'version.rejected')
   return {
     ...summary,
+    author: asRecorded(history.find(h => h.action === 'version.created'), summary.author),
     parameters: v.parameters,
     justifications: v.justifications,
     evaluation: v.evaluation as EvaluationSnapshot | null,
@@ -49,7 +53,8 @@ export async function readVersion(user: SignedIn, id: number): Promise<VersionVi
     baselineVersionId: v.baselineVersionId ?? null,
     platform: { key: platform.key, name: platform.name, motorMaxRpm: platform.motorMaxRpm, torqueConstantNmPerA: platform.torqueConstantNmPerA ?? null, schema: platform.schema },
     parent: parent ? { id: parent.id, versionNo: parent.versionNo } : null,
-    reviews: reviews.map(reviewView),
+    // Each review is written in the one transaction with its decision's event, so they pair in order.
+    reviews: reviews.map((r, i) => { const view = reviewView(r); return { ...view, reviewer: asRecorded(decisions[i], view.reviewer) } }),
     history,
     liveEvaluation: evaluateOnServer(subject.spec, platform, v.parameters, settings)
   }
