@@ -3,7 +3,7 @@ import { Profile, ProfileVersion, Review, User, type Vehicle } from '../../model
 import type { SignedIn } from '../guards/guards'
 import type { EvaluationSnapshot, HistoryEntry, ProfileView, VersionView } from '../../../shared/schemas/profile-views'
 import { useDatabase } from '../database/db'
-import { ACTOR_NAME_SQL } from '../history/recorded-names'
+import { ACTOR_NAME_SQL, withRecordedPeople } from '../history/recorded-names'
 import { vehicleView } from '../fleet/vehicles'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { profileBaselines } from '../kits/baseline'
@@ -67,10 +67,14 @@ export async function listProfiles(user: SignedIn, vehicle: Vehicle): Promise<{ 
     include: [{ model: ProfileVersion, as: 'versions', include: [authorInclude, reviewsInclude] }],
     order: [['name', 'ASC'], [{ model: ProfileVersion, as: 'versions' }, 'versionNo', 'DESC']]
   })
-  const baselines = await profileBaselines(profiles)
+  const [baselines, summaries] = await Promise.all([
+    profileBaselines(profiles),
+    withRecordedPeople(user.workshopId, profiles.flatMap(p => (p.versions ?? []).map(versionSummary)))
+  ])
+  const summaryOf = new Map(summaries.map(s => [s.id, s]))
   const items = profiles.map(p => ({
     id: p.id, vehicleId: vehicle.id, name: p.name, onCarVersionId: p.onCarVersionId,
-    versions: (p.versions ?? []).map(versionSummary), baseline: baselines.get(p.id) ?? null
+    versions: (p.versions ?? []).map(v => summaryOf.get(v.id)!), baseline: baselines.get(p.id) ?? null
   }))
   return { items, total: items.length }
 }
