@@ -40,7 +40,7 @@ export async function createCheck(admin: SignedIn, input: WorkshopCheckCreate): 
     for (let i = 2; taken.has(key) || (mandatoryCheckKeys as readonly string[]).includes(key); i++) key = `${base}-${i}`
     const c = await WorkshopCheck.create({
       workshopId: admin.workshopId, key, label: input.label, record: input.record, unit: input.unit ?? null, min: input.min ?? null, max: input.max ?? null,
-      required: input.required, platformKeys: input.platformKeys ?? null
+      required: input.required, platformKeys: input.platformKeys ? [...new Set(input.platformKeys)] : null
     }, { transaction })
     const after = checkView(c)
     await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'workshop-check.created', entityType: 'workshop-check', entityId: c.id, data: { after } })
