@@ -154,7 +154,9 @@ describe('malformed input never breaks a route, and a refusal names the field', 
     expect(list.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['q'])
     const body = await tuner.call('POST', '/api/vehicles', { stockRef: 'NUL\u0000', make: 'Testwick', model: 'Saloon', year: 1964 })
     expect(body.status).toBe(400)
-    expect(body.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['stockRef'])
+    // The fields the body lacks are named too: a U+0000 does not hide another fault.
+    expect(body.body.data.fields.map((f: { path: string }) => f.path)).toEqual(expect.arrayContaining(['stockRef', 'platformKey']))
+    expect(body.body.data.fields.find((f: { path: string }) => f.path === 'stockRef').message).toMatch(/U\+0000/)
   })
 
   it('answers odd queries without a server error, and a 400 names the key', async () => {

@@ -36,23 +36,27 @@ export function nulFields(input: unknown, path: string[] = [], out: FieldError[]
   return out
 }
 
+// Every field at fault: a U+0000 in one field does not hide a wrong value in another (the schema reads the
+// text without storing it).
+function faults<S extends z.ZodType>(schema: S, input: unknown): { ok: true, data: z.output<S> } | { ok: false, errors: FieldError[] } {
+  const nul = nulFields(input)
+  const result = schema.safeParse(input)
+  if (result.success && !nul.length) return { ok: true, data: result.data }
+  return { ok: false, errors: [...nul, ...(result.success ? [] : zodFieldErrors(result.error))] }
+}
+
 // For getValidatedQuery / readValidatedBody / getValidatedRouterParams: a 400 naming every field at fault.
 export function zodValidator<S extends z.ZodType>(schema: S) {
   return (input: unknown): z.output<S> => {
-    const nul = nulFields(input)
-    if (nul.length) throw new ValidationFailure(nul)
-    const result = schema.safeParse(input)
-    if (result.success) return result.data
-    throw new ValidationFailure(zodFieldErrors(result.error))
+    const fields = faults(schema, input)
+    if (fields.ok) return fields.data
+    throw new ValidationFailure(fields.errors)
   }
 }
 
-
 // The same answer for a body read another way (e.g. readSmallJsonBody): a 400 naming every field at fault.
 export function parseOr400<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
-  const nul = nulFields(input)
-  const result = nul.length ? null : schema.safeParse(input)
-  if (result?.success) return result.data
-  const fields = result ? zodFieldErrors(result.error) : nul
-  throw createError({ statusCode: 400, message: summary(fields), data: { fields } })
+  const checked = faults(schema, input)
+  if (checked.ok) return checked.data
+  throw createError({ statusCode: 400, message: summary(checked.errors), data: { fields: checked.errors } })
 }
