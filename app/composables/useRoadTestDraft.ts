@@ -1,12 +1,15 @@
 import type { CheckDraft } from '~/components/road-test/RoadTestCheckStep.vue'
+import type { ExtraCheckDraft } from '~/components/road-test/RoadTestExtraChecksStep.vue'
 
 // The road test being entered, kept on the phone as it goes (localStorage), so a reload, a closed tab or a
 // lost signal loses nothing. Its send key is made when the record is begun and goes with every send, so the
-// server records it once however often it is sent. Photos stay in the page's memory only.
+// server records it once however often it is sent. Photos stay in the page's memory only. The workshop's own
+// checks are kept beside the six drive checks.
 export interface RoadTestDraftState {
   idempotencyKey: string
   conditions: { surface: string, ambientC: number | null, route: string }
   checks: CheckDraft[]
+  extras: ExtraCheckDraft[]
   verdict: string
   step: number
   // Sent and not yet answered, or waiting for the connection: sent again when the page can.
@@ -15,24 +18,37 @@ export interface RoadTestDraftState {
 
 const storageKey = (versionId: number) => `voltwright:road-test:${versionId}`
 
-export function freshRoadTestDraft(keys: readonly string[]): RoadTestDraftState {
+const freshExtra = (key: string): ExtraCheckDraft => ({ key, verdict: '', value: null, note: '' })
+
+export function freshRoadTestDraft(keys: readonly string[], extraKeys: readonly string[] = []): RoadTestDraftState {
   return {
     idempotencyKey: crypto.randomUUID(),
     conditions: { surface: '', ambientC: null, route: '' },
     checks: keys.map(key => ({ key, verdict: '', values: {}, note: '', photos: [] })),
+    extras: extraKeys.map(freshExtra),
     verdict: '', step: 0, unsent: false
   }
 }
 
-export function useRoadTestDraft(versionId: number, keys: readonly string[]) {
-  const draft = ref<RoadTestDraftState>(freshRoadTestDraft(keys))
+// A kept draft's workshop checks, in the order the brief lists them now: one kept from before keeps what was
+// entered, a check added since starts empty, one no longer asked for is dropped.
+export function keptExtras(kept: unknown, extraKeys: readonly string[]): ExtraCheckDraft[] {
+  const list = Array.isArray(kept) ? kept as Partial<ExtraCheckDraft>[] : []
+  return extraKeys.map((key) => {
+    const k = list.find(e => e?.key === key)
+    return k ? { key, verdict: typeof k.verdict === 'string' ? k.verdict : '', value: typeof k.value === 'number' ? k.value : null, note: typeof k.note === 'string' ? k.note : '' } : freshExtra(key)
+  })
+}
+
+export function useRoadTestDraft(versionId: number, keys: readonly string[], extraKeys: readonly string[] = []) {
+  const draft = ref<RoadTestDraftState>(freshRoadTestDraft(keys, extraKeys))
   const restored = ref(false)
   let stopKeeping = () => {}
   onMounted(() => {
     try {
       const kept = JSON.parse(localStorage.getItem(storageKey(versionId)) ?? 'null') as RoadTestDraftState | null
       if (kept?.idempotencyKey) {
-        draft.value = { ...draft.value, ...kept, checks: kept.checks.map(c => ({ ...c, photos: [] })) }
+        draft.value = { ...draft.value, ...kept, checks: kept.checks.map(c => ({ ...c, photos: [] })), extras: keptExtras(kept.extras, extraKeys) }
         restored.value = true
       }
     } catch { /* a draft that does not read is started afresh */ }

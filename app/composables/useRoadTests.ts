@@ -11,7 +11,7 @@ export interface RoadTestBrief {
   profile: { id: number, name: string }
   vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null, spec: VehicleSpec }
   platform: PlatformLike
-  platformSchema: { properties?: Record<string, { title: string, unit: string, minimum: number, maximum: number, multipleOf: number }> } | null
+  platformSchema: Record<string, unknown> | null
   expected: { maxStartGradePct: number | null, creepHoldGradePct: number | null, liftOffDecelMs2: number | null, brakeRegenDecelMs2: number | null, topSpeedKph: number | null, zeroTo50S: number | null, regenGripLimitMs2: { dry: number | null, wet: number | null, snow: number | null }, derateStartC?: { motor: number | null, inverter: number | null, battery: number | null } }
   warnings: { rule: string, severity: Severity, message: string }[]
   extraChecks: WorkshopCheck[]

@@ -1,17 +1,9 @@
 import { execFileSync } from 'node:child_process'
-import { mkdtempSync, writeFileSync } from 'node:fs'
-import { tmpdir } from 'node:os'
-import { join } from 'node:path'
 import { describe, it, expect } from 'vitest'
 import { useRunningServer, signIn, baseUrl } from './helpers'
+import { pdfText } from './pdf'
 import { approvedVersion, newCar, newClient, newProfile, recordRoadTest } from './road-test-fixtures'
 
-// poppler's pdftotext (Debian poppler-utils, installed by the test command) reads the text back.
-function pdfText(pdf: Buffer): string {
-  const dir = mkdtempSync(join(tmpdir(), 'voltwright-pdf-'))
-  writeFileSync(join(dir, 'sheet.pdf'), pdf)
-  return execFileSync('pdftotext', ['-layout', join(dir, 'sheet.pdf'), '-'], { encoding: 'utf8' })
-}
 const fonts = (pdf: Buffer) => execFileSync('pdffonts', ['-'], { input: pdf, encoding: 'utf8' })
 
 describe('handover sheet', async () => {

@@ -49,6 +49,15 @@ export async function approvedVersion(profileId: number, o: { author?: string, r
   return id
 }
 
+// A new car on another drive unit with an approved version of that unit's default settings.
+export async function approvedVersionOn(platformKey: string, model: string): Promise<{ car: { id: number, stockRef: string }, versionId: number }> {
+  const tuner = await as(TUNER)
+  const car = await newCar(tuner, { platformKey, model })
+  const draft = await newProfileWithDraft(tuner, car.id, { parameters: defaultParameters(findPlatform(platformKey)!), rationale: 'Test settings' })
+  await submitAndApprove(tuner, await as('engineer@voltwright.test'), draft.id)
+  return { car, versionId: draft.id }
+}
+
 export const passingChecks = () => [
   { key: 'hill-start', verdict: 'pass', values: { gradientPct: 18, rollbackMm: 60 }, note: 'Quarry Lane, both directions' },
   { key: 'lift-off-regen', verdict: 'pass', values: { feel: 'gentle' }, note: '' },

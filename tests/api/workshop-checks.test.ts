@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest'
-import { anonymous, signIn, unique, useRunningServer, withDatabase } from './helpers'
-import { approvedVersion, newCar, newProfile, passingChecks, PLATFORM, roadTestBody } from './road-test-fixtures'
+import { anonymous, baseUrl, signIn, unique, useRunningServer, withDatabase } from './helpers'
+import { pdfText } from './pdf'
+import { approvedVersion, newCar, newProfile, passingChecks, PLATFORM, recordRoadTest, roadTestBody } from './road-test-fixtures'
+
+// A label short enough to sit on one line of the handover sheet's table.
+const short = () => Math.random().toString(36).slice(2, 6)
 
 describe('the workshop\'s own road-test checks', async () => {
   await useRunningServer()
@@ -77,6 +81,66 @@ describe('the workshop\'s own road-test checks', async () => {
       expect(again.body.checkList.find((c: { key: string }) => c.key === heater.body.key).label).toBe(heater.body.label)
     } finally {
       for (const c of [heater, volts, elsewhere]) await admin.call('PATCH', `/api/workshop/checks/${c.body.key}`, { retired: true })
+    }
+  })
+
+  it('a change keeps the rules: the range in order against the stored bound, known drive units, a retired check brought back before it changes', async () => {
+    const made = await admin.call('POST', '/api/workshop/checks', { label: `Pack voltage ${unique('p')}`, record: 'number', unit: 'V', min: 300, max: 400 })
+    const path = `/api/workshop/checks/${made.body.key}`
+    const events = async () => (await withDatabase(c => c.query(`SELECT count(*)::int AS n FROM audit_events e JOIN workshop_checks w ON w.id::text = e."entityId"
+      WHERE e."entityType" = 'workshop-check' AND w.key = $1`, [made.body.key]))).rows[0].n as number
+    try {
+      // Only one bound sent: the stored other one counts.
+      const above = await admin.call('PATCH', path, { min: 450 })
+      expect(above.status).toBe(400)
+      expect(above.body.data.fields).toEqual([{ path: 'max', message: 'Must be above the lowest' }])
+      expect((await admin.call('PATCH', path, { max: 250 })).status).toBe(400)
+      expect((await admin.call('PATCH', path, { min: 400, max: 300 })).status).toBe(400)
+      const cleared = await admin.call('PATCH', path, { min: null, max: 250 })
+      expect(cleared.body).toMatchObject({ min: null, max: 250 })
+      const unknown = await admin.call('PATCH', path, { platformKeys: ['no-such-unit'] })
+      expect(unknown.status).toBe(400)
+      expect(unknown.body.data.fields[0].path).toBe('platformKeys')
+      expect((await admin.call('POST', '/api/workshop/checks', { label: 'Tow bar', record: 'pass-fail', platformKeys: ['no-such-unit'] })).status).toBe(400)
+      expect((await admin.call('PATCH', path, { platformKeys: [PLATFORM, PLATFORM] })).body.platformKeys).toEqual([PLATFORM])
+      // A change that changes nothing leaves no event.
+      const before = await events()
+      expect((await admin.call('PATCH', path, { label: cleared.body.label, platformKeys: [PLATFORM] })).status).toBe(200)
+      expect(await events()).toBe(before)
+
+      await admin.call('PATCH', path, { retired: true })
+      const whileRetired = await admin.call('PATCH', path, { label: 'Pack voltage at rest', required: true })
+      expect(whileRetired.status).toBe(400)
+      expect(whileRetired.body.message).toMatch(/retired: bring it back/)
+      expect((await tester.call('GET', '/api/workshop/checks')).body.items.find((c: { key: string }) => c.key === made.body.key)).toMatchObject({ retired: true, required: false })
+      const back = await admin.call('PATCH', path, { retired: false, label: 'Pack voltage at rest' })
+      expect(back.body).toMatchObject({ retired: false, label: 'Pack voltage at rest' })
+      expect(await events()).toBe(before + 2)
+      expect((await tester.call('PATCH', path, { label: 'Mine now' })).status).toBe(403)
+    } finally {
+      await admin.call('PATCH', path, { retired: true })
+    }
+  })
+
+  it('the handover sheet lists the workshop\'s checks the road test was recorded with, with their verdicts and values', async () => {
+    const horn = await admin.call('POST', '/api/workshop/checks', { label: `Horn ${short()}`, record: 'pass-fail', platformKeys: [PLATFORM] })
+    const volts = await admin.call('POST', '/api/workshop/checks', { label: `Supply ${short()}`, record: 'number', unit: 'V', min: 13.2, max: 14.8, platformKeys: [PLATFORM] })
+    try {
+      const car = await newCar(tuner)
+      const roadTestId = await recordRoadTest(tester, await approvedVersion(await newProfile(car.id)), {
+        checks: [...passingChecks(), { key: horn.body.key, verdict: 'not-tested', values: {}, note: 'Fuse out' }, { key: volts.body.key, verdict: 'pass', values: { value: 13.85 }, note: '' }]
+      })
+      expect((await tester.call('POST', `/api/road-tests/${roadTestId}/sign-off`)).status).toBe(200)
+      // Renamed after the road test: the sheet keeps the name it was recorded with.
+      await admin.call('PATCH', `/api/workshop/checks/${horn.body.key}`, { label: 'Horn, renamed later' })
+      const res = await fetch(`${baseUrl}/api/vehicles/${car.id}/handover.pdf`, { headers: { cookie: tuner.cookie } })
+      expect(res.status).toBe(200)
+      const text = pdfText(Buffer.from(await res.arrayBuffer()))
+      expect(text).toMatch(new RegExp(`${horn.body.label}\\s+Not tested\\s+—\\s+Fuse out`))
+      expect(text).toMatch(new RegExp(`${volts.body.label}\\s+Pass\\s+13\\.85 V`))
+      expect(text).not.toContain('Horn, renamed later')
+    } finally {
+      for (const c of [horn, volts]) await admin.call('PATCH', `/api/workshop/checks/${c.body.key}`, { retired: true })
     }
   })
 })

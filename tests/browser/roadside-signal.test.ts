@@ -3,7 +3,7 @@ import type { Page } from 'playwright-core'
 import { launch, baseUrl, shot } from './helpers'
 import { passTheRest, recordConditions, recordHillStart, recordLiftOff } from './steps'
 import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
-import { approvedVersion, newCar, newProfile } from '../api/road-test-fixtures'
+import { approvedVersion, newCar, newProfile, PLATFORM } from '../api/road-test-fixtures'
 
 const JS_BUDGET = 120 * 1024 // compressed JavaScript for the road-test page, as sent over the wire
 
@@ -97,5 +97,36 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))
     expect((await roadTests()).length).toBe(before + 1)
     await shot(page, 'roadside-02-sent-once')
+  })
+
+  it('keeps the workshop\'s own checks on the phone too: a reload loses neither a verdict, a value nor a note', async () => {
+    const admin = await signIn('admin@voltwright.test')
+    const horn = (await admin.call('POST', '/api/workshop/checks', { label: 'Horn sounds clearly', record: 'pass-fail', platformKeys: [PLATFORM] })).body
+    const volts = (await admin.call('POST', '/api/workshop/checks', { label: '12 V supply at idle', record: 'number', unit: 'V', min: 13.2, max: 14.8, platformKeys: [PLATFORM] })).body
+    try {
+      const versionId = await approvedVersion(profileId)
+      await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+      await fillTheWizard(page)
+      await page.getByRole('button', { name: 'Workshop checks', exact: true }).click()
+      const hornBlock = page.locator(`[data-extra-check="${horn.key}"]`)
+      await hornBlock.locator('label', { has: page.getByRole('radio', { name: 'Fail', exact: true }) }).click()
+      await hornBlock.getByLabel('Note').fill('Weak, one of two horns silent')
+      await page.locator(`#rt-extra-${volts.key}-value`).fill('13.7')
+      await page.reload({ waitUntil: 'networkidle' })
+      await expect.poll(() => page.getByRole('heading', { name: 'The workshop\'s own checks' }).count()).toBe(1)
+      expect(await hornBlock.getByRole('radio', { name: 'Fail', exact: true }).isChecked()).toBe(true)
+      expect(await hornBlock.getByLabel('Note').inputValue()).toBe('Weak, one of two horns silent')
+      expect(await page.locator(`#rt-extra-${volts.key}-value`).inputValue()).toBe('13.7')
+      await shot(page, 'roadside-03-workshop-checks-kept')
+      await page.getByRole('button', { name: 'Verdict', exact: true }).click()
+      await page.locator('label', { has: page.getByRole('radio', { name: 'Fail', exact: true }) }).click()
+      await page.getByRole('button', { name: 'Save the road test' }).click()
+      await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))
+      const saved = (await tester.call('GET', `/api/road-tests/${page.url().split('/').pop()}`)).body
+      expect(saved.checks.find((c: { key: string }) => c.key === horn.key)).toMatchObject({ verdict: 'fail', note: 'Weak, one of two horns silent' })
+      expect(saved.checks.find((c: { key: string }) => c.key === volts.key)).toMatchObject({ verdict: 'pass', values: { value: 13.7 } })
+    } finally {
+      for (const c of [horn, volts]) await admin.call('PATCH', `/api/workshop/checks/${c.key}`, { retired: true })
+    }
   })
 })

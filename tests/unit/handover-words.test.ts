@@ -2,6 +2,8 @@ import { describe, it, expect } from 'vitest'
 import { settingLines } from '../../server/utils/handover/words'
 import { handoverCautions } from '../../shared/schemas/handover'
 import { fenlow45 } from '../../shared/platforms/fenlow-45'
+import { quennel95 } from '../../shared/platforms/quennel-95'
+import { ROLES, roleSettings } from '../../shared/compute'
 
 const defaults = Object.fromEntries(Object.entries(fenlow45.schema.properties).map(([k, p]) => [k, (p as { default: number }).default]))
 
@@ -13,6 +15,18 @@ describe('the handover sheet in the owner\'s words', () => {
     const titles = Object.values(fenlow45.schema.properties).map(p => (p as { title: string }).title)
     const labelled = lines.map(l => l.label)
     expect(titles.filter(t => !labelled.includes(t)).every(t => /Power cap|Torque cap|Regen torque limit|Lift-off regen|Brake regen|Creep|Speed limit|Reverse speed limit|derate start|cut-off|discharge limit|charge limit/.test(t))).toBe(true)
+  })
+
+  it('lists the settings the physics knows in the role list\'s order, then the rest by label, whatever order the schema is stored in', () => {
+    // PostgreSQL's jsonb keeps keys shortest first; reversed here so the stored order cannot happen to be right.
+    const scrambled = { ...quennel95.schema, properties: Object.fromEntries(Object.entries(quennel95.schema.properties).reverse()) }
+    const values = Object.fromEntries(Object.entries(quennel95.schema.properties).map(([k, p]) => [k, (p as { default: unknown }).default]))
+    const labels = settingLines(scrambled, values).map(l => l.label)
+    const byRole = roleSettings(quennel95.schema)
+    const titleOf = (name: string) => (quennel95.schema.properties as Record<string, { title: string }>)[name]!.title
+    const roleTitles = Object.keys(ROLES).filter(r => byRole[r as keyof typeof byRole]).map(r => titleOf(byRole[r as keyof typeof byRole]!))
+    expect(labels).toEqual([...roleTitles, 'Drive mode', 'Hill hold', 'Throttle map'])
+    expect(labels.slice(0, 3)).toEqual(['Power cap', 'Torque cap', 'Regen torque limit'])
   })
 
   it('speaks of the wheels regen brakes on this car', () => {

@@ -1,5 +1,5 @@
 // The on-car settings and figures in plain words for the car's owner (handover sheet).
-import { kphToMph, kwToHp, roleSettings, schemaProperties, type Evaluation, type Role, type SettingValues } from '../../../shared/compute'
+import { kphToMph, kwToHp, ROLES, roleSettings, schemaProperties, type Evaluation, type Role, type SettingValues } from '../../../shared/compute'
 import { settingLabel, settingValueWords } from '../../../shared/utils/setting-words'
 import type { HandoverLine } from '../../../shared/schemas/handover'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
@@ -19,10 +19,15 @@ const ROLE_NOTES: Partial<Record<Role, string>> = {
   motorDerateStart: 'When parts run hot the power fades gradually before it stops.'
 }
 
-// Every setting of the drive unit, in the schema's order, in words.
+// Every setting of the drive unit in words: those the physics knows in the role list's order, then the
+// rest by label (the stored schema keeps no order of its own).
 export function settingLines(schema: unknown, p: SettingValues): HandoverLine[] {
   const roles = Object.fromEntries(Object.entries(roleSettings(schema)).map(([role, name]) => [name, role as Role]))
-  return Object.entries(schemaProperties(schema)).map(([name, prop]) => {
+  const roleOrder = Object.keys(ROLES)
+  const rank = (name: string) => (roles[name] ? roleOrder.indexOf(roles[name]) : roleOrder.length)
+  const entries = Object.entries(schemaProperties(schema))
+    .sort(([a, pa], [b, pb]) => rank(a) - rank(b) || settingLabel(pa, a).localeCompare(settingLabel(pb, b), 'en-GB'))
+  return entries.map(([name, prop]) => {
     const note = roles[name] ? ROLE_NOTES[roles[name]] : undefined
     const line = { label: settingLabel(prop, name), value: settingValueWords(prop, p[name]) }
     return note ? { ...line, note } : line

@@ -1,8 +1,10 @@
 // The workshop's own road-test checks: listed, added, changed or retired (never deleted), each with its
 // audit event; and the ones that apply to a car's drive unit (docs/road-tests.md).
+import type { Transaction } from 'sequelize'
 import { Workshop, WorkshopCheck } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import { useDatabase } from '../database/db'
+import { findWorkshopPlatform } from '../platforms/platforms'
 import { appendAuditEvent } from '../history/audit'
 import { mandatoryCheckKeys } from '../../../shared/schemas/road-test'
 import { keyFromLabel, type RecordedCheck, type WorkshopCheck as CheckView, type WorkshopCheckCreate, type WorkshopCheckPatch } from '../../../shared/schemas/workshop-checks'
@@ -32,12 +34,13 @@ export async function createCheck(admin: SignedIn, input: WorkshopCheckCreate): 
     const taken = new Set((await WorkshopCheck.findAll({ where: { workshopId: admin.workshopId }, attributes: ['key'], transaction })).map(c => c.key))
     if (taken.size >= MAX_CHECKS) throw createError({ statusCode: 409, message: `A workshop keeps at most ${MAX_CHECKS} checks; retire or change one instead.` })
     // The six drive checks' keys stay theirs, so "Hill start" as the workshop's own check becomes hill-start-2.
+    await requireKnownUnits(admin.workshopId, input.platformKeys ?? null, transaction)
     const base = keyFromLabel(input.label)
     let key = base
     for (let i = 2; taken.has(key) || (mandatoryCheckKeys as readonly string[]).includes(key); i++) key = `${base}-${i}`
     const c = await WorkshopCheck.create({
       workshopId: admin.workshopId, key, label: input.label, record: input.record, unit: input.unit ?? null, min: input.min ?? null, max: input.max ?? null,
-      required: input.required, platformKeys: input.platformKeys ?? null
+      required: input.required, platformKeys: input.platformKeys ? [...new Set(input.platformKeys)] : null
     }, { transaction })
     const after = checkView(c)
     await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'workshop-check.created', entityType: 'workshop-check', entityId: c.id, data: { after } })
@@ -50,12 +53,12 @@ export async function changeCheck(admin: SignedIn, key: string, input: WorkshopC
     const c = await WorkshopCheck.findOne({ where: { workshopId: admin.workshopId, key }, transaction, lock: transaction.LOCK.UPDATE })
     if (!c) throw createError({ statusCode: 404, message: 'No such check in this workshop.' })
     const before = checkView(c)
-    const { retired, ...fields } = input
+    const { retired, ...asked } = input
+    const fields = asked.platformKeys ? { ...asked, platformKeys: [...new Set(asked.platformKeys)] } : asked
     const next = { ...before, ...fields, ...(retired === undefined ? {} : { retired }) }
-    if (next.min !== null && next.max !== null && next.min >= next.max) throw createError({ statusCode: 400, message: 'The highest expected value must be above the lowest.', data: { fields: [{ path: 'max', message: 'Must be above the lowest' }] } })
-    if (before.record === 'pass-fail' && (next.unit !== null || next.min !== null || next.max !== null)) {
-      throw createError({ statusCode: 400, message: 'A pass/fail check has no unit or expected range.', data: { fields: [{ path: 'unit', message: 'Only a number check has a unit' }] } })
-    }
+    refuseChange(before, next, retired)
+    if (same(before, next)) return before
+    await requireKnownUnits(admin.workshopId, fields.platformKeys ?? null, transaction)
     await c.update({ ...fields, ...(retired === undefined ? {} : { retiredAt: retired ? (c.retiredAt ?? new Date()) : null }) }, { transaction })
     const after = checkView(c)
     await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'workshop-check.changed', entityType: 'workshop-check', entityId: c.id, data: { before, after } })
@@ -63,3 +66,22 @@ export async function changeCheck(admin: SignedIn, key: string, input: WorkshopC
   })
 }
 
+// What a change may not do: set a range backwards (the stored bound counts when only one is sent), give a
+// pass/fail check a unit or a range, or change a retired check without bringing it back in the same change.
+function refuseChange(before: CheckView, next: CheckView, retired: boolean | undefined) {
+  const refuse = (message: string, path: string, field: string) => { throw createError({ statusCode: 400, message, data: { fields: [{ path, message: field }] } }) }
+  if (before.retired && retired !== false && !same(before, next)) refuse('This check is retired: bring it back before changing it.', 'retired', 'Retired')
+  if (next.min !== null && next.max !== null && next.min >= next.max) refuse('The highest expected value must be above the lowest.', 'max', 'Must be above the lowest')
+  if (before.record === 'pass-fail' && (next.unit !== null || next.min !== null || next.max !== null)) refuse('A pass/fail check has no unit or expected range.', 'unit', 'Only a number check has a unit')
+}
+
+const same = (a: CheckView, b: CheckView) => JSON.stringify(a) === JSON.stringify(b)
+
+// Every drive unit named must be one this workshop can fit (its own or a shared one).
+async function requireKnownUnits(workshopId: number, keys: string[] | null, transaction: Transaction) {
+  for (const key of new Set(keys ?? [])) {
+    if (!await findWorkshopPlatform(key, workshopId, transaction)) {
+      throw createError({ statusCode: 400, message: `There is no drive unit "${key}" in this workshop.`, data: { fields: [{ path: 'platformKeys', message: 'Choose drive units from the list' }] } })
+    }
+  }
+}
