@@ -33,7 +33,7 @@ describe('workshop settings', async () => {
       expect(res.body.settings.friction).toEqual({ ...original.friction, wet: 0.42 })
       expect(res.body.settings.units.speed).toBe('mph')
       expect(res.body.settings.minStartGradePct).toBe(original.minStartGradePct)
-      const events = await withDatabase(c => c.query('SELECT data FROM audit_events WHERE action = $1 ORDER BY id DESC LIMIT 1', ['workshop.settings-changed']))
+      const events = await withDatabase(c => c.query(`SELECT data FROM audit_events WHERE action = $1 AND "workshopId" = (SELECT "workshopId" FROM users WHERE email = $2) ORDER BY id DESC LIMIT 1`, ['workshop.settings-changed', 'admin@voltwright.test']))
       expect(events.rows[0].data.patch).toEqual(expect.arrayContaining([
         { op: 'replace', path: '/friction/wet', value: 0.42 },
         { op: 'replace', path: '/units/speed', value: 'mph' }
