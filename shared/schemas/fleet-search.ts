@@ -58,6 +58,10 @@ export const searchFields: SearchField[] = [
 export const UNIT_SETTING = /^unit\.([a-z0-9][a-z0-9-]{0,59})\.([A-Za-z][A-Za-z0-9]{0,39})$/
 export const unitSettingField = (unitKey: string, setting: string) => `unit.${unitKey}.${setting}`
 
+// The fields a result shows a value for: each condition's field once, but not the warnings or the drive unit,
+// which every result shows anyway.
+export const resultFields = (conditions: { field: string }[]) => [...new Set(conditions.map(c => c.field))].filter(f => f !== 'warning' && f !== DRIVE_UNIT_FIELD)
+
 const value = z.union([z.number().finite(), z.string().trim().max(80)])
 export const searchConditionSchema = z.object({
   field: z.string().max(120),

@@ -1,6 +1,6 @@
 // Fleet search results as CSV: every cell quoted and formula-neutralised (server/utils/history/csv.ts).
 import type { SignedIn } from '../guards/guards'
-import { searchFields, type SearchRequest } from '../../../shared/schemas/fleet-search'
+import { resultFields, searchFields, type SearchRequest } from '../../../shared/schemas/fleet-search'
 import { ruleTitles } from '../../../shared/compute/rule-titles'
 import type { RuleId } from '../../../shared/compute/types'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
@@ -24,7 +24,7 @@ function cell(key: string, v: number | string | null | undefined) {
 }
 
 export async function searchCsv(user: SignedIn, q: SearchRequest): Promise<string> {
-  const shown = [...new Set(q.conditions.map(c => c.field))].filter(f => f !== 'warning')
+  const shown = resultFields(q.conditions)
   const units = await unitSettingsOf(user, shown)
   const lines = [csvLine(['Stock ref', 'Year', 'Make', 'Model', 'Stage', 'Drive unit', 'Profile', 'Version on the car', ...shown.map(f => heading(f, units)), 'Warnings raised'])]
   let cursor: string | undefined

@@ -10,8 +10,7 @@ const figureColumn: Record<string, string> = {
 }
 const carColumn: Record<string, string> = { make: 'v.make', model: 'v.model', year: 'v.year', status: 'v.status', driveUnit: 'pl.key' }
 
-// display: what a result shows for the field where that differs from what is compared (a unit's name, not its key).
-export interface FieldSql { sql: string, kind: SearchField['kind'] | 'warning', unit?: { key: string, setting: string }, display?: string }
+export interface FieldSql { sql: string, kind: SearchField['kind'] | 'warning', unit?: { key: string, setting: string } }
 
 const field400 = (field: string) => createError({ statusCode: 400, message: `"${field}" is not a field fleet search knows.`, data: { fields: [{ path: 'field', message: 'Not a searchable field' }] } })
 
@@ -19,13 +18,13 @@ export function fieldSql(key: string): FieldSql {
   const unit = UNIT_SETTING.exec(key)
   if (unit) {
     // The unit's key and the setting's name are bound (see bound below); search-units.ts checks both exist.
-    return { sql: `(CASE WHEN pl.key = :unit_KEY AND jsonb_typeof(e.settings->:unit_NAME) = 'number' THEN (e.settings->>:unit_NAME)::double precision END)`, kind: 'number', unit: { key: unit[1]!, setting: unit[2]! } }
+    return { sql: `(CASE WHEN pl.key = :unit_KEY AND jsonb_typeof(e.settings->CAST(:unit_NAME AS text)) = 'number' THEN (e.settings->>CAST(:unit_NAME AS text))::double precision END)`, kind: 'number', unit: { key: unit[1]!, setting: unit[2]! } }
   }
   const f = byKey.get(key)
   if (!f) throw field400(key)
   const [group, name] = key.split('.') as [string, string | undefined]
   if (group === 'warning') return { sql: 'e.warnings', kind: 'warning' }
-  if (group === 'car') return { sql: carColumn[name!]!, kind: f.kind, ...(name === 'driveUnit' ? { display: 'pl.name' } : {}) }
+  if (group === 'car') return { sql: carColumn[name!]!, kind: f.kind }
   // Typed columns (migrations/20261203-7101-fleet-search-columns.ts): the spec's facts computed by PostgreSQL
   // from the spec, the settings by role in their role's own unit, written with the figures.
   if (group === 'spec') return { sql: `v."spec${name![0]!.toUpperCase()}${name!.slice(1)}"`, kind: f.kind }
@@ -57,10 +56,10 @@ export function conditionSql(c: SearchCondition, i: number, replacements: Record
   if (f.kind !== 'number' && !['eq', 'ne', 'in'].includes(c.op)) throw bad('Words can only be matched: is, is not, or is one of.')
   if (f.kind === 'warning') {
     replacements[name] = c.op === 'in' ? list : list[0]
-    if (c.op === 'in') return `e.warnings && CAST(ARRAY[:${name}] AS text[])`
+    if (c.op === 'in') return `e.warnings && CAST(:${name} AS text[])`
     return c.op === 'eq' ? `:${name} = ANY(e.warnings)` : `NOT (:${name} = ANY(e.warnings))`
   }
   replacements[name] = c.op === 'in' ? list : list[0]
-  if (c.op === 'in') return `${sql} IN (:${name})`
+  if (c.op === 'in') return `${sql} = ANY(:${name})` // one array parameter (selectRows)
   return `${sql} ${compare[c.op]} :${name}`
 }

@@ -1,10 +1,9 @@
 // Fleet search over the cars' on-car evaluations, keyset-paged (docs/fleet.md). One statement: the
 // conditions run once over typed columns, the total is counted from those matches, and only the page's
 // cars are joined to their names, profiles and versions.
-import { QueryTypes } from 'sequelize'
 import type { SignedIn } from '../guards/guards'
-import type { SearchAnswer, SearchItem, SearchRequest } from '../../../shared/schemas/fleet-search'
-import { useDatabase } from '../database/db'
+import { resultFields, type SearchAnswer, type SearchItem, type SearchRequest } from '../../../shared/schemas/fleet-search'
+import { selectRows } from '../database/db'
 import { bound, conditionSql, fieldSql } from './search-sql'
 import { unitSettingsOf } from './search-units'
 
@@ -43,9 +42,10 @@ export async function searchFleet(user: SignedIn, q: SearchRequest): Promise<Sea
     replacements.cursorId = c.id
     after = `(m.k, m."profileId") ${desc ? '<' : '>'} (CAST(:cursorValue AS ${numeric ? 'double precision' : 'text'}), :cursorId)`
   }
-  const shown = [...new Set(q.conditions.map(c => c.field))].filter(f => f !== 'warning')
-  const valueCols = shown.map((f, i) => { const s = fieldSql(f); return `, ${s.display ?? bound(s, `v${i}`, replacements)} AS "v${i}"` })
-  const rows = await useDatabase().query<Row>(
+  const shown = resultFields(q.conditions)
+  const valueCols = shown.map((f, i) => `, ${bound(fieldSql(f), `v${i}`, replacements)} AS "v${i}"`)
+  // Straight on a pooled connection with the values as parameters (selectRows): no Sequelize work per search.
+  const rows = await selectRows<Row>(
     `WITH m AS MATERIALIZED (
        SELECT e."profileId", e."vehicleId", e."versionId", e.warnings, ${key} AS k${valueCols.join('')}
          FROM on_car_evaluations e JOIN vehicles v ON v.id = e."vehicleId" JOIN platforms pl ON pl.id = v."platformId"
@@ -55,8 +55,7 @@ export async function searchFleet(user: SignedIn, q: SearchRequest): Promise<Sea
        FROM (SELECT count(*) AS total FROM m) c LEFT JOIN page ON true
        LEFT JOIN vehicles v ON v.id = page."vehicleId" LEFT JOIN platforms pl ON pl.id = v."platformId"
        LEFT JOIN profiles p ON p.id = page."profileId" LEFT JOIN profile_versions pv ON pv.id = page."versionId"
-      ORDER BY page.k ${dir}, page."profileId" ${dir}`,
-    { replacements, type: QueryTypes.SELECT })
+      ORDER BY page.k ${dir}, page."profileId" ${dir}`, replacements)
   const found = rows.filter(r => r.profileId !== null)
   const more = found.length > q.limit
   const page = found.slice(0, q.limit)
