@@ -32,6 +32,8 @@ describe('the workshop\'s fleet', async () => {
     await page.locator('#spec-kerbMassKg').fill('940')
     await page.getByRole('button', { name: 'Book in the car' }).click()
     await page.waitForURL(/\/cars\/\d+$/)
+    // The overview says in a line that the car stands on its kit's latest baseline.
+    await expect.poll(() => page.locator('[data-kit-baseline]').textContent()).toContain('on the Forge RD-45 small rear-drive kit\'s latest baseline (version 2)')
     // The kit and its baseline are shown with the car's profiles, on the settings and versions tab.
     await page.getByRole('link', { name: 'Settings and versions' }).click()
     await expect.poll(() => page.locator('[data-baseline-of]').textContent()).toContain('Built from the Forge RD-45 small rear-drive kit, on its baseline version 2')
@@ -42,7 +44,10 @@ describe('the workshop\'s fleet', async () => {
     const page = tuner.page
     await page.goto(`${baseUrl}/cars`, { waitUntil: 'networkidle' })
     await page.getByRole('link', { name: 'OF-107' }).click()
-    await page.getByRole('link', { name: 'Settings and versions' }).click()
+    // The overview says the baseline moved and leads to the versions tab, where the move is offered.
+    await expect.poll(() => page.locator('[data-kit-baseline]').textContent()).toContain('kit\'s baseline moved to version 2; this car stands on version 1')
+    await page.getByRole('link', { name: 'See what changed and move onto it' }).click()
+    await page.waitForURL(/\/cars\/\d+\/versions$/)
     await expect.poll(() => page.locator('[data-baseline-of]').textContent()).toContain('The kit\'s baseline moved: version 2 is approved.')
     await page.getByRole('button', { name: /Show the departures/ }).click()
     await expect.poll(() => page.getByRole('region', { name: /Where this car departs from the baseline/ }).textContent()).toContain('Power cap')
