@@ -31,10 +31,11 @@ const bareQueries = [
        FROM on_car_evaluations e JOIN vehicles v ON v.id = e."vehicleId" JOIN platforms pl ON pl.id = v."platformId"
       WHERE e."workshopId" = $1 AND v."specDrivenAxle" = 'rear' AND e."liftOffOverSnowGripMs2" > 0 AND v."specKerbMassKg" < 1200),
    page AS (SELECT * FROM m WHERE true ORDER BY m.k ASC, m."profileId" ASC LIMIT 51)
-   SELECT c.total, page.*, page.k::text AS "sortKey", v."stockRef", v.make, v.model, v.year, v.status, pl.name AS "driveUnit", p.name AS "profileName", pv."versionNo"
+   SELECT c.total, page.*, page.k::text AS "sortKey", x.*
      FROM (SELECT count(*) AS total FROM m) c LEFT JOIN page ON true
-     LEFT JOIN vehicles v ON v.id = page."vehicleId" LEFT JOIN platforms pl ON pl.id = v."platformId"
-     LEFT JOIN profiles p ON p.id = page."profileId" LEFT JOIN profile_versions pv ON pv.id = page."versionId"
+     LEFT JOIN LATERAL (SELECT v."stockRef", v.make, v.model, v.year, v.status, pl.name AS "driveUnit", p.name AS "profileName", pv."versionNo"
+       FROM vehicles v JOIN platforms pl ON pl.id = v."platformId" JOIN profiles p ON p.id = page."profileId" JOIN profile_versions pv ON pv.id = page."versionId"
+      WHERE v.id = page."vehicleId" LIMIT 1) x ON true
     ORDER BY page.k ASC, page."profileId" ASC`
 ]
 

@@ -51,10 +51,12 @@ export async function searchFleet(user: SignedIn, q: SearchRequest): Promise<Sea
          FROM on_car_evaluations e JOIN vehicles v ON v.id = e."vehicleId" JOIN platforms pl ON pl.id = v."platformId"
         WHERE ${where.join(' AND ')}),
      page AS (SELECT * FROM m WHERE ${after} ORDER BY m.k ${dir}, m."profileId" ${dir} LIMIT :limit)
-     SELECT c.total, page.*, page.k::text AS "sortKey", v."stockRef", v.make, v.model, v.year, v.status, pl.name AS "driveUnit", p.name AS "profileName", pv."versionNo"
+     SELECT c.total, page.*, page.k::text AS "sortKey", x.*
        FROM (SELECT count(*) AS total FROM m) c LEFT JOIN page ON true
-       LEFT JOIN vehicles v ON v.id = page."vehicleId" LEFT JOIN platforms pl ON pl.id = v."platformId"
-       LEFT JOIN profiles p ON p.id = page."profileId" LEFT JOIN profile_versions pv ON pv.id = page."versionId"
+       -- Each page row looked up by its keys (LIMIT 1 keeps the planner from scanning whole tables to join a page).
+       LEFT JOIN LATERAL (SELECT v."stockRef", v.make, v.model, v.year, v.status, pl.name AS "driveUnit", p.name AS "profileName", pv."versionNo"
+         FROM vehicles v JOIN platforms pl ON pl.id = v."platformId" JOIN profiles p ON p.id = page."profileId" JOIN profile_versions pv ON pv.id = page."versionId"
+        WHERE v.id = page."vehicleId" LIMIT 1) x ON true
       ORDER BY page.k ${dir}, page."profileId" ${dir}`, replacements)
   const found = rows.filter(r => r.profileId !== null)
   const more = found.length > q.limit
