@@ -15,6 +15,7 @@ import * as onCarEvaluations from './20261203-5003-on-car-evaluations'
 import * as roadTestIdempotency from './20261203-6001-road-test-idempotency'
 import * as driveUnitRoles from './20261203-4001-drive-unit-roles'
 import * as workshopChecks from './20261203-4003-workshop-checks'
+import * as fleetSearchColumns from './20261203-7101-fleet-search-columns'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -32,5 +33,6 @@ export const migrations = [
   { name: '20261203-5003-on-car-evaluations', ...onCarEvaluations },
   { name: '20261203-6001-road-test-idempotency', ...roadTestIdempotency },
   { name: '20261203-4001-drive-unit-roles', ...driveUnitRoles },
-  { name: '20261203-4003-workshop-checks', ...workshopChecks }
+  { name: '20261203-4003-workshop-checks', ...workshopChecks },
+  { name: '20261203-7101-fleet-search-columns', ...fleetSearchColumns }
 ]

@@ -8,6 +8,7 @@ import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
 import { defaultParameters, findPlatform } from '../shared/platforms'
 import { exampleSpec } from '../shared/compute/example'
 import { defaultSettings, evaluate } from '../shared/compute'
+import { PARAMETER_NAMES } from '../shared/compute/parameters'
 import { vehicleSpecSchema } from '../shared/schemas/vehicle-spec'
 import { snapshotOf, versionContentHash } from '../server/utils/versions/content'
 
@@ -79,6 +80,10 @@ for (let from = have; from < CARS; from += BATCH) {
       (SELECT count(*) FROM jsonb_array_elements(pv.evaluation->'warnings') w WHERE w->>'severity' = 'danger'),
       (SELECT count(*) FROM jsonb_array_elements(pv.evaluation->'warnings') w WHERE w->>'severity' = 'caution')
       FROM profiles p JOIN profile_versions pv ON pv.id = p."onCarVersionId", LATERAL (SELECT pv.evaluation->'figures' AS f) x WHERE p.id = ANY($2::int[])`, [w!.id, profiles.map(p => p.id)])
+  // The role values the sign-off writes beside the figures (server/utils/fleet/on-car-evaluation.ts).
+  const roles = profiles.map((p, k) => ({ profileId: p.id, ...variants[(from + k + 1) % VARIANTS]!.evaluation.roles }))
+  await q(`UPDATE on_car_evaluations e SET ${PARAMETER_NAMES.map(n => `"${n}" = r."${n}"`).join(', ')}
+      FROM jsonb_to_recordset(CAST($1 AS jsonb)) AS r("profileId" int, ${PARAMETER_NAMES.map(n => `"${n}" float8`).join(', ')}) WHERE e."profileId" = r."profileId"`, [JSON.stringify(roles)])
   await q('COMMIT')
   console.log(`[seed-fleet] ${from + n} of ${CARS} cars (${((Date.now() - started) / 1000).toFixed(0)} s)`)
 }

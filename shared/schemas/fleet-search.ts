@@ -1,29 +1,34 @@
 // Fleet search: the fields a condition may name (an allow-list; the server maps each to SQL of its own),
 // the operators, and the request (docs/fleet.md).
 import { z } from 'zod'
-import { PARAMETER_NAMES } from '../compute/parameters'
+import { ownUnit } from '../compute/quantities'
+import { ROLE_NAMES, ROLES, type RoleInfo } from '../compute/roles'
+import { ruleTitles } from '../compute/rule-titles'
 import { RULE_IDS } from '../compute/types'
-import { fenlow45 } from '../platforms/fenlow-45'
 import { vehicleStatuses, vehicleStatusLabels } from './vehicle'
 
 export const searchOps = ['eq', 'ne', 'lt', 'le', 'gt', 'ge', 'in'] as const
 export type SearchOp = typeof searchOps[number]
 export const searchOpLabels: Record<SearchOp, string> = { eq: 'is', ne: 'is not', lt: 'below', le: 'at most', gt: 'above', ge: 'at least', in: 'is one of' }
 
-export interface SearchField { key: string, label: string, unit: string, group: string, kind: 'number' | 'text' | 'choice', choices?: { value: string, label: string }[] }
+export interface SearchField { key: string, label: string, unit: string, group: string, kind: 'number' | 'text' | 'choice', choices?: { value: string, label: string }[], help?: string }
 
 const num = (group: string, key: string, label: string, unit = ''): SearchField => ({ key, label, unit, group, kind: 'number' })
-const roleTitle = (name: string) => {
-  const p = (fenlow45.schema.properties as Record<string, { title?: string, unit?: string }>)[name]
-  return { label: p?.title ?? name, unit: p?.unit ?? '' }
-}
+export const ROLE_GROUP = 'Settings by what they do (any drive unit)'
+// A setting by its role: the same quantity whichever drive unit, read in the role's own unit.
+const roleField = (info: RoleInfo): SearchField => ({
+  ...num(ROLE_GROUP, `setting.${info.field}`, info.words[0]!.toUpperCase() + info.words.slice(1), ownUnit(info.quantity)),
+  help: `The ${info.words} setting of whichever drive unit the car has, in ${ownUnit(info.quantity)}.`
+})
+// The drive unit as a choice by name; the names come from the workshop's drive units on the screen.
+export const DRIVE_UNIT_FIELD = 'car.driveUnit'
 
 export const searchFields: SearchField[] = [
   { key: 'car.make', label: 'Make', unit: '', group: 'The car', kind: 'text' },
   { key: 'car.model', label: 'Model', unit: '', group: 'The car', kind: 'text' },
   num('The car', 'car.year', 'Year'),
   { key: 'car.status', label: 'Stage', unit: '', group: 'The car', kind: 'choice', choices: vehicleStatuses.map(s => ({ value: s, label: vehicleStatusLabels[s] })) },
-  { key: 'car.driveUnit', label: 'Drive unit (its key)', unit: '', group: 'The car', kind: 'text' },
+  { key: DRIVE_UNIT_FIELD, label: 'Drive unit', unit: '', group: 'The car', kind: 'choice', choices: [] },
   { key: 'spec.drivenAxle', label: 'Driven wheels', unit: '', group: 'Chassis', kind: 'choice', choices: [{ value: 'rear', label: 'Rear' }, { value: 'front', label: 'Front' }, { value: 'all', label: 'All' }] },
   num('Chassis', 'spec.kerbMassKg', 'Kerb mass', 'kg'),
   num('Chassis', 'spec.frontAxleLoadPct', 'Share of mass on the front axle', '%'),
@@ -32,7 +37,7 @@ export const searchFields: SearchField[] = [
   num('Chassis', 'spec.originalEnginePowerKw', 'Original engine power', 'kW'),
   num('Chassis', 'spec.packNominalVoltageV', 'Pack voltage', 'V'),
   num('Chassis', 'spec.packCapacityKwh', 'Pack capacity', 'kWh'),
-  ...PARAMETER_NAMES.map(n => num('Settings on the car', `setting.${n}`, roleTitle(n).label, roleTitle(n).unit)),
+  ...ROLE_NAMES.map(r => roleField(ROLES[r])),
   num('What the settings do', 'figure.liftOffOverSnowGripMs2', 'Lift-off deceleration above the snow grip limit', 'm/s²'),
   num('What the settings do', 'figure.liftOffOverWetGripMs2', 'Lift-off deceleration above the wet grip limit', 'm/s²'),
   num('What the settings do', 'figure.liftOffDecelMs2', 'Lift-off deceleration at 50 km/h', 'm/s²'),
@@ -45,11 +50,17 @@ export const searchFields: SearchField[] = [
   num('What the settings do', 'figure.powerRatioToOriginal', 'Power against the original engine', 'times'),
   num('What the settings do', 'figure.peakDischargeCurrentA', 'Peak battery current', 'A'),
   num('What the settings do', 'figure.dangerCount', 'Danger warnings', ''),
-  { key: 'warning', label: 'Warning raised', unit: '', group: 'Warnings', kind: 'choice', choices: RULE_IDS.map(r => ({ value: r, label: r.replace(/-/g, ' ') })) }
+  { key: 'warning', label: 'Warning raised', unit: '', group: 'Warnings', kind: 'choice', choices: RULE_IDS.map(r => ({ value: r, label: ruleTitles[r].title })) }
 ]
 
-// A setting by name within one drive unit: "unit.<key>.<setting>" (the unit's key is a bound value, never SQL).
-export const UNIT_SETTING = /^unit\.([a-z0-9][a-z0-9-]{0,59})\.([A-Za-z]{1,40})$/
+// A setting by name within one drive unit: "unit.<key>.<setting>" (the unit's key and the setting's name are
+// bound values, never SQL; the server checks the unit has that number setting).
+export const UNIT_SETTING = /^unit\.([a-z0-9][a-z0-9-]{0,59})\.([A-Za-z][A-Za-z0-9]{0,39})$/
+export const unitSettingField = (unitKey: string, setting: string) => `unit.${unitKey}.${setting}`
+
+// The fields a result shows a value for: each condition's field once, but not the warnings or the drive unit,
+// which every result shows anyway.
+export const resultFields = (conditions: { field: string }[]) => [...new Set(conditions.map(c => c.field))].filter(f => f !== 'warning' && f !== DRIVE_UNIT_FIELD)
 
 const value = z.union([z.number().finite(), z.string().trim().max(80)])
 export const searchConditionSchema = z.object({

@@ -32,6 +32,8 @@ describe('the workshop\'s fleet', async () => {
     await page.locator('#spec-kerbMassKg').fill('940')
     await page.getByRole('button', { name: 'Book in the car' }).click()
     await page.waitForURL(/\/cars\/\d+$/)
+    // The overview says in a line that the car stands on its kit's latest baseline.
+    await expect.poll(() => page.locator('[data-kit-baseline]').textContent()).toContain('on the Forge RD-45 small rear-drive kit\'s latest baseline (version 2)')
     // The kit and its baseline are shown with the car's profiles, on the settings and versions tab.
     await page.getByRole('link', { name: 'Settings and versions' }).click()
     await expect.poll(() => page.locator('[data-baseline-of]').textContent()).toContain('Built from the Forge RD-45 small rear-drive kit, on its baseline version 2')
@@ -42,7 +44,10 @@ describe('the workshop\'s fleet', async () => {
     const page = tuner.page
     await page.goto(`${baseUrl}/cars`, { waitUntil: 'networkidle' })
     await page.getByRole('link', { name: 'OF-107' }).click()
-    await page.getByRole('link', { name: 'Settings and versions' }).click()
+    // The overview says the baseline moved and leads to the versions tab, where the move is offered.
+    await expect.poll(() => page.locator('[data-kit-baseline]').textContent()).toContain('kit\'s baseline moved to version 2; this car stands on version 1')
+    await page.getByRole('link', { name: 'See what changed and move onto it' }).click()
+    await page.waitForURL(/\/cars\/\d+\/versions$/)
     await expect.poll(() => page.locator('[data-baseline-of]').textContent()).toContain('The kit\'s baseline moved: version 2 is approved.')
     await page.getByRole('button', { name: /Show the departures/ }).click()
     await expect.poll(() => page.getByRole('region', { name: /Where this car departs from the baseline/ }).textContent()).toContain('Power cap')
@@ -76,5 +81,27 @@ describe('the workshop\'s fleet', async () => {
     expect(await page.locator('#cond-1-field').inputValue()).toBe('figure.liftOffOverSnowGripMs2')
     expect(await accessibilityProblems(page)).toEqual([])
     await shot(page, 'fleet-04-search')
+  })
+
+  it('searches by a setting of one drive unit, picking the unit and the setting by name', async () => {
+    const page = engineer.page
+    await page.goto(`${baseUrl}/fleet/search`, { waitUntil: 'networkidle' })
+    await page.getByRole('button', { name: 'Add a condition' }).click()
+    await page.locator('#cond-0-field').selectOption({ label: 'A setting of one drive unit, by its name' })
+    await page.locator('#cond-0-unit').selectOption({ label: 'Fenlow 45' })
+    await page.locator('#cond-0-setting').selectOption({ label: 'Lift-off regen (%)' })
+    await page.locator('#cond-0-op').selectOption({ label: 'at least' })
+    await page.locator('#cond-0-value').fill('0')
+    await page.locator('#cond-0-value').blur()
+    await page.getByRole('button', { name: 'Search', exact: true }).click()
+    await page.waitForURL(/c=unit\.fenlow-45\.liftOffRegenPct~ge~0/)
+    await expect.poll(() => page.getByRole('columnheader', { name: 'Lift-off regen on the Fenlow 45 (%)' }).count()).toBe(1)
+    await expect.poll(() => page.locator('tbody tr').count()).toBeGreaterThan(0)
+    for (const cell of await page.locator('tbody tr td:nth-child(2)').allTextContents()) expect(cell).toBe('Fenlow 45')
+    await page.reload({ waitUntil: 'networkidle' })
+    expect(await page.locator('#cond-0-unit').inputValue()).toBe('fenlow-45')
+    expect(await page.locator('#cond-0-setting').inputValue()).toBe('liftOffRegenPct')
+    expect(await accessibilityProblems(page)).toEqual([])
+    await shot(page, 'fleet-05-search-one-unit')
   })
 })

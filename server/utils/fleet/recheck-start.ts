@@ -9,10 +9,11 @@ import { useDatabase } from '../database/db'
 export async function startRecheck(t: Transaction, workshopId: number, reason: RecheckReason, detail: Record<string, unknown>, requestedById: number | null) {
   const sequelize = useDatabase()
   const q = <T extends object>(sql: string, replacements: Record<string, unknown>) => sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction: t })
-  const running = await q<{ id: number }>(`UPDATE fleet_rechecks SET state = 'superseded', "finishedAt" = now() WHERE "workshopId" = :workshopId AND state = 'running' RETURNING id`, { workshopId })
-  if (running.length) {
-    await q(`UPDATE fleet_recheck_items SET state = 'skipped' WHERE "recheckId" IN (:ids) AND state = 'pending' RETURNING id`, { ids: running.map(r => r.id) })
-  }
+  // Items before their run, the order a batch locks them in (runRecheckBatch claims items, then counts them on
+  // the run), so a re-check started while a batch is being checked waits for it rather than deadlocking.
+  await q(`UPDATE fleet_recheck_items SET state = 'skipped' WHERE state = 'pending'
+      AND "recheckId" IN (SELECT id FROM fleet_rechecks WHERE "workshopId" = :workshopId AND state = 'running') RETURNING id`, { workshopId })
+  await q(`UPDATE fleet_rechecks SET state = 'superseded', "finishedAt" = now() WHERE "workshopId" = :workshopId AND state = 'running' RETURNING id`, { workshopId })
   const [run] = await q<{ id: number }>(`INSERT INTO fleet_rechecks ("workshopId", reason, detail, "rulesRelease", "requestedById") VALUES (:workshopId, :reason, CAST(:detail AS jsonb), :release, :requestedById) RETURNING id`,
     { workshopId, reason, detail: JSON.stringify(detail), release: RULES_RELEASE, requestedById })
   const items = await q<{ n: string }>(`WITH added AS (

@@ -1,58 +1,71 @@
-// Fleet search over the cars' on-car evaluations, keyset-paged (docs/fleet.md).
-import { QueryTypes } from 'sequelize'
+// Fleet search over the cars' on-car evaluations, keyset-paged (docs/fleet.md). One statement: the
+// conditions run once over typed columns, the total is counted from those matches, and only the page's
+// cars are joined to their names, profiles and versions.
 import type { SignedIn } from '../guards/guards'
-import type { SearchAnswer, SearchItem, SearchRequest } from '../../../shared/schemas/fleet-search'
-import { useDatabase } from '../database/db'
-import { conditionSql, fieldSql } from './search-sql'
+import { resultFields, type SearchAnswer, type SearchItem, type SearchRequest } from '../../../shared/schemas/fleet-search'
+import { selectRows } from '../database/db'
+import { bound, conditionSql, fieldSql } from './search-sql'
+import { unitSettingsOf } from './search-units'
 
 interface Cursor { v: string | null, id: number }
 const encode = (c: Cursor) => Buffer.from(JSON.stringify(c)).toString('base64url')
-function decode(s: string): Cursor {
+const cursor400 = () => createError({ statusCode: 400, message: 'That page marker is not one this search gave.', data: { fields: [{ path: 'cursor', message: 'Not a page marker' }] } })
+function decode(s: string, numeric: boolean): Cursor {
+  let c: Cursor
   try {
-    const c = JSON.parse(Buffer.from(s, 'base64url').toString()) as Cursor
-    if (Number.isInteger(c.id) && (c.v === null || typeof c.v === 'string')) return c
-  } catch { /* answered below */ }
-  throw createError({ statusCode: 400, message: 'That page marker is not one this search gave.', data: { fields: [{ path: 'cursor', message: 'Not a page marker' }] } })
+    c = JSON.parse(Buffer.from(s, 'base64url').toString()) as Cursor
+  } catch {
+    throw cursor400()
+  }
+  const okValue = c?.v === null || (typeof c?.v === 'string' && c.v.length <= 200 && (!numeric || /^-?(?:Infinity|\d+(?:\.\d+)?(?:e[+-]?\d+)?)$/.test(c.v)))
+  if (Number.isInteger(c?.id) && okValue) return c
+  throw cursor400()
 }
 
-const FROM = `FROM on_car_evaluations e JOIN vehicles v ON v.id = e."vehicleId" JOIN platforms pl ON pl.id = v."platformId"`
+interface Row { total: string, profileId: number | null, vehicleId: number, stockRef: string, make: string, model: string, year: number, status: string, driveUnit: string, profileName: string, versionId: number, versionNo: number, warnings: string[], sortKey: string, [value: string]: unknown }
 
 export async function searchFleet(user: SignedIn, q: SearchRequest): Promise<SearchAnswer> {
+  await unitSettingsOf(user, q.conditions.map(c => c.field)) // a setting named within a unit must be one of its number settings
   const replacements: Record<string, unknown> = { workshopId: user.workshopId, limit: q.limit + 1 }
   const where = ['e."workshopId" = :workshopId', ...q.conditions.map((c, i) => conditionSql(c, i, replacements))]
   const sortField = q.sort ? fieldSql(q.sort.field) : { sql: 'v."stockRef"', kind: 'text' as const }
-  if (sortField.kind === 'warning' || sortField.unitKey) throw createError({ statusCode: 400, message: 'Sort by a figure, a setting or a fact of the car.', data: { fields: [{ path: 'sort.field', message: 'Cannot sort by this' }] } })
+  if (sortField.kind === 'warning' || sortField.unit) throw createError({ statusCode: 400, message: 'Sort by a figure, a setting or a fact of the car.', data: { fields: [{ path: 'sort.field', message: 'Cannot sort by this' }] } })
   const desc = q.sort?.dir === 'desc'
-  // Missing values sort last either way; the key is text-cast so one cursor form serves every field.
-  const key = sortField.kind === 'number' ? `COALESCE(${sortField.sql}, '${desc ? '-' : ''}Infinity')` : `COALESCE(${sortField.sql}::text, '')`
-  const cast = sortField.kind === 'number' ? 'double precision' : 'text'
-  const paged = [...where]
+  const dir = desc ? 'DESC' : 'ASC'
+  const numeric = sortField.kind === 'number'
+  // Missing values sort last either way; text keys are text-cast so one cursor form serves every field.
+  const key = numeric ? `COALESCE(${sortField.sql}, '${desc ? '-' : ''}Infinity')` : `COALESCE(${sortField.sql}::text, '')`
+  let after = 'true'
   if (q.cursor) {
-    const c = decode(q.cursor)
+    const c = decode(q.cursor, numeric)
     replacements.cursorValue = c.v ?? ''
     replacements.cursorId = c.id
-    paged.push(`(${key}, e."profileId") ${desc ? '<' : '>'} (CAST(:cursorValue AS ${cast}), :cursorId)`)
+    after = `(m.k, m."profileId") ${desc ? '<' : '>'} (CAST(:cursorValue AS ${numeric ? 'double precision' : 'text'}), :cursorId)`
   }
-  const shown = [...new Set(q.conditions.map(c => c.field))].filter(f => f !== 'warning')
-  const valueCols = shown.map((f, i) => { const s = fieldSql(f); if (s.unitKey) replacements[`v${i}_unit`] = s.unitKey; return `${s.sql.replace(':unit_KEY', `:v${i}_unit`)} AS "v${i}"` })
-  const db = useDatabase()
-  const [rows, [count]] = await Promise.all([
-    db.query<Record<string, unknown>>(
-      `SELECT e."profileId", v.id AS "vehicleId", v."stockRef", v.make, v.model, v.year, v.status, pl.name AS "driveUnit", p.name AS "profileName",
-              e."versionId", pv."versionNo", e.warnings, (${key})::text AS "sortKey"${valueCols.length ? `, ${valueCols.join(', ')}` : ''}
-         ${FROM} JOIN profiles p ON p.id = e."profileId" JOIN profile_versions pv ON pv.id = e."versionId"
-        WHERE ${paged.join(' AND ')} ORDER BY ${key} ${desc ? 'DESC' : 'ASC'}, e."profileId" ${desc ? 'DESC' : 'ASC'} LIMIT :limit`,
-      { replacements, type: QueryTypes.SELECT }),
-    db.query<{ n: string }>(`SELECT count(*) AS n ${FROM} WHERE ${where.join(' AND ')}`, { replacements, type: QueryTypes.SELECT })
-  ])
-  const more = rows.length > q.limit
-  const page = rows.slice(0, q.limit)
+  const shown = resultFields(q.conditions)
+  const valueCols = shown.map((f, i) => `, ${bound(fieldSql(f), `v${i}`, replacements)} AS "v${i}"`)
+  // Straight on a pooled connection with the values as parameters (selectRows): no Sequelize work per search.
+  const rows = await selectRows<Row>(
+    `WITH m AS MATERIALIZED (
+       SELECT e."profileId", e."vehicleId", e."versionId", e.warnings, ${key} AS k${valueCols.join('')}
+         FROM on_car_evaluations e JOIN vehicles v ON v.id = e."vehicleId" JOIN platforms pl ON pl.id = v."platformId"
+        WHERE ${where.join(' AND ')}),
+     page AS (SELECT * FROM m WHERE ${after} ORDER BY m.k ${dir}, m."profileId" ${dir} LIMIT :limit)
+     SELECT c.total, page.*, page.k::text AS "sortKey", x.*
+       FROM (SELECT count(*) AS total FROM m) c LEFT JOIN page ON true
+       -- Each page row looked up by its keys (LIMIT 1 keeps the planner from scanning whole tables to join a page).
+       LEFT JOIN LATERAL (SELECT v."stockRef", v.make, v.model, v.year, v.status, pl.name AS "driveUnit", p.name AS "profileName", pv."versionNo"
+         FROM vehicles v JOIN platforms pl ON pl.id = v."platformId" JOIN profiles p ON p.id = page."profileId" JOIN profile_versions pv ON pv.id = page."versionId"
+        WHERE v.id = page."vehicleId" LIMIT 1) x ON true
+      ORDER BY page.k ${dir}, page."profileId" ${dir}`, replacements)
+  const found = rows.filter(r => r.profileId !== null)
+  const more = found.length > q.limit
+  const page = found.slice(0, q.limit)
   const items: SearchItem[] = page.map(r => ({
-    vehicleId: r.vehicleId as number, stockRef: r.stockRef as string, make: r.make as string, model: r.model as string, year: r.year as number,
-    status: r.status as string, driveUnit: r.driveUnit as string, profileName: r.profileName as string, versionId: r.versionId as number,
-    versionNo: r.versionNo as number, warnings: r.warnings as string[],
+    vehicleId: r.vehicleId, stockRef: r.stockRef, make: r.make, model: r.model, year: r.year, status: r.status, driveUnit: r.driveUnit,
+    profileName: r.profileName, versionId: r.versionId, versionNo: r.versionNo, warnings: r.warnings,
     values: Object.fromEntries(shown.map((f, i) => [f, r[`v${i}`] as number | string | null]))
   }))
   const last = page.at(-1)
-  return { items, total: Number(count!.n), nextCursor: more && last ? encode({ v: last.sortKey as string, id: last.profileId as number }) : null }
+  return { items, total: Number(rows[0]?.total ?? 0), nextCursor: more && last ? encode({ v: last.sortKey, id: last.profileId! }) : null }
 }

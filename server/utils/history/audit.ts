@@ -73,30 +73,56 @@ export function eventHash(row: Hashed): string {
   return sha256Hex(canonicalJson(hashedRecord(row)))
 }
 
-// Appends one event to the workshop's chain inside the caller's transaction, in the current form. The
-// advisory lock serialises writers on the chain head, so concurrent changes never fork it.
+// Appends one event to the workshop's chain inside the caller's transaction, in the current form.
 export async function appendAuditEvent(t: Transaction, input: AuditInput): Promise<AuditRow> {
+  return (await appendAuditEvents(t, input.workshopId, [input]))[0]!
+}
+
+// Appends events to one workshop's chain in the order given, inside the caller's transaction: one lock, one
+// read of the chain head and one insert however many (the fleet re-check writes a hundred at a time). The
+// advisory lock serialises writers on the chain head, so concurrent changes never fork it.
+export async function appendAuditEvents(t: Transaction, workshopId: number, inputs: AuditInput[]): Promise<AuditRow[]> {
+  if (!inputs.length) return []
+  if (inputs.some(i => i.workshopId !== workshopId)) throw new Error('appendAuditEvents: one workshop\'s chain at a time')
   const sequelize = (t as unknown as { sequelize: Sequelize }).sequelize
-  const actorId = input.actorId ?? null
+  const actorIds = [...new Set(inputs.map(i => i.actorId ?? null).filter((a): a is number => a !== null))]
   const [people] = await Promise.all([
-    actorId === null ? [] : sequelize.query<RecordedActor>('SELECT name, email FROM users WHERE id = :id', { replacements: { id: actorId }, type: QueryTypes.SELECT, transaction: t }),
-    sequelize.query('SELECT pg_advisory_xact_lock(7301, :w)', { replacements: { w: input.workshopId }, transaction: t })
+    actorIds.length ? sequelize.query<RecordedActor & { id: number }>('SELECT id, name, email FROM users WHERE id IN (:ids)', { replacements: { ids: actorIds }, type: QueryTypes.SELECT, transaction: t }) : [],
+    sequelize.query('SELECT pg_advisory_xact_lock(7301, :w)', { replacements: { w: workshopId }, transaction: t })
   ])
-  if (actorId !== null && !people[0]) throw new Error(`appendAuditEvent: no person ${actorId}`)
+  const byId = new Map(people.map(p => [p.id, p]))
+  for (const id of actorIds) if (!byId.has(id)) throw new Error(`appendAuditEvent: no person ${id}`)
   const [head] = await sequelize.query<{ hash: string }>(
     'SELECT hash FROM audit_events WHERE "workshopId" = :w ORDER BY id DESC LIMIT 1',
-    { replacements: { w: input.workshopId }, type: QueryTypes.SELECT, transaction: t })
-  const row: Hashed = {
-    form: CURRENT_FORM, workshopId: input.workshopId, vehicleId: input.vehicleId ?? null, actorId,
-    actor: people[0] ? { name: people[0].name, email: people[0].email } : null,
-    action: input.action, entityType: input.entityType, entityId: String(input.entityId),
-    // Hashed as PostgreSQL will give it back: plain JSON, no undefined, no Dates.
-    data: JSON.parse(JSON.stringify(input.data ?? {})), createdAt: new Date(), prevHash: head?.hash ?? null
-  }
-  const hash = eventHash(row)
-  const [inserted] = await sequelize.query<{ id: string }>(
+    { replacements: { w: workshopId }, type: QueryTypes.SELECT, transaction: t })
+  let prevHash = head?.hash ?? null
+  const createdAt = new Date()
+  const rows = inputs.map((input) => {
+    const actorId = input.actorId ?? null
+    const person = actorId === null ? undefined : byId.get(actorId)
+    const row: Hashed = {
+      form: CURRENT_FORM, workshopId, vehicleId: input.vehicleId ?? null, actorId,
+      actor: person ? { name: person.name, email: person.email } : null,
+      action: input.action, entityType: input.entityType, entityId: String(input.entityId),
+      // Hashed as PostgreSQL will give it back: plain JSON, no undefined, no Dates.
+      data: JSON.parse(JSON.stringify(input.data ?? {})), createdAt, prevHash
+    }
+    const hash = eventHash(row)
+    prevHash = hash
+    return { ...row, hash }
+  })
+  // Inserted in chain order, so ids follow the chain.
+  const inserted = await sequelize.query<{ id: string, hash: string }>(
     `INSERT INTO audit_events (form, "workshopId", "vehicleId", "actorId", actor, action, "entityType", "entityId", data, "createdAt", "prevHash", hash)
-     VALUES (:form, :workshopId, :vehicleId, :actorId, CAST(:actor AS jsonb), :action, :entityType, :entityId, CAST(:data AS jsonb), :createdAt, :prevHash, :hash) RETURNING id`,
-    { replacements: { ...row, actor: row.actor ? JSON.stringify(row.actor) : null, data: JSON.stringify(row.data), hash }, type: QueryTypes.SELECT, transaction: t })
-  return { ...row, id: String(inserted!.id), hash }
+     SELECT r.form, r."workshopId", r."vehicleId", r."actorId", r.actor, r.action, r."entityType", r."entityId", r.data, r."createdAt", r."prevHash", r.hash
+       FROM jsonb_to_recordset(CAST(:rows AS jsonb)) AS r(form integer, "workshopId" integer, "vehicleId" integer, "actorId" integer, actor jsonb, action text,
+            "entityType" text, "entityId" text, data jsonb, "createdAt" timestamptz, "prevHash" text, hash text, n bigint)
+      ORDER BY r.n RETURNING id, hash`,
+    { replacements: { rows: JSON.stringify(rows.map((row, n) => ({ ...row, n }))) }, type: QueryTypes.SELECT, transaction: t })
+  const ids = new Map(inserted.map(r => [r.hash, String(r.id)]))
+  return rows.map((row) => {
+    const id = ids.get(row.hash)
+    if (id === undefined) throw new Error('appendAuditEvents: an event was not written')
+    return { ...row, id }
+  })
 }
