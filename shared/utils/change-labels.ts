@@ -33,7 +33,7 @@ const userLabels: Record<string, string> = { '/name': 'Name', '/email': 'E-mail'
 const platformLabels: Record<string, string> = { '/name': 'Name', '/key': 'Short name', '/motorMaxRpm': 'Highest motor speed, rpm' }
 
 const checkLabels: Record<string, string> = {
-  '/key': 'Short name', '/label': 'Check', '/record': 'Recorded as (pass-fail or number)', '/unit': 'Unit', '/min': 'Lowest allowed',
+  '/key': 'Short name', '/label': 'Check', '/record': 'Recorded as', '/unit': 'Unit', '/min': 'Lowest allowed',
   '/max': 'Highest allowed', '/required': 'Required on every road test', '/retired': 'Retired', '/platformKeys': 'Only for drive units (none: every one)'
 }
 
