@@ -22,7 +22,7 @@ async function fillTheWizard(page: Page, photoName?: string) {
 }
 
 // What the phone still keeps of road tests: drafts in localStorage, photos in IndexedDB.
-const keptDrafts = (page: Page) => page.evaluate(() => Object.keys(localStorage).filter(k => k.startsWith('voltwright:road-test:')))
+const keptDrafts = (page: Page, versionId: number) => page.evaluate(id => Object.keys(localStorage).filter(k => k.startsWith('voltwright:road-test:') && k.endsWith(`:${id}`)), versionId)
 const keptPhotos = (page: Page) => page.evaluate(() => new Promise<number>((resolve, reject) => {
   const open = indexedDB.open('voltwright-road-tests')
   open.onerror = () => reject(open.error)
@@ -106,7 +106,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     expect(after.length).toBe(before + 1)
     const recorded = (await tester.call('GET', `/api/road-tests/${after.at(-1)!.id}`)).body as { photos: { filename: string, caption: string }[] }
     expect(recorded.photos.map(p => [p.filename, p.caption])).toEqual([['hill-rollback.jpg', 'Hill start']])
-    expect(await keptDrafts(page)).toEqual([])
+    expect(await keptDrafts(page, versionId)).toEqual([])
     expect(await keptPhotos(page)).toBe(0)
   })
 
@@ -131,7 +131,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await page.waitForURL(u => u.pathname === `/road-tests/${id}`)
     expect(await photos()).toBe(1)
     expect(await keptPhotos(page)).toBe(0)
-    expect(await keptDrafts(page)).toEqual([])
+    expect(await keptDrafts(page, versionId)).toEqual([])
   })
 
   it('keeps one person\'s road test from the next person signed in on the same phone', async () => {
@@ -142,7 +142,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
       await signInAs('tester@voltwright.test')
       await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
       await recordConditions(shared.page, { surface: 'Wet', ambientC: '9', route: 'Left on the shared phone' })
-      await expect.poll(() => keptDrafts(shared.page)).toHaveLength(1)
+      await expect.poll(() => keptDrafts(shared.page, versionId)).toHaveLength(1)
       await shared.page.request.post(`${baseUrl}/api/auth/logout`, { headers: { origin: baseUrl } })
       await signInAs('lead@voltwright.test')
       await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
