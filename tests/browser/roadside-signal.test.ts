@@ -21,7 +21,9 @@ async function fillTheWizard(page: Page, photoName?: string) {
   await passTheRest(page)
 }
 
-// What the phone still keeps of road tests: drafts in localStorage, photos in IndexedDB.
+// What the phone still keeps of road tests: the wizard's page in the worker's cache, drafts in localStorage,
+// photos in IndexedDB.
+const keptPage = (page: Page) => page.evaluate(async () => Boolean(await (await caches.open('voltwright-roadside-v1')).match(location.href)))
 const keptDrafts = (page: Page, versionId: number) => page.evaluate(id => Object.keys(localStorage).filter(k => k.startsWith('voltwright:road-test:') && k.endsWith(`:${id}`)), versionId)
 const keptPhotos = (page: Page) => page.evaluate(() => new Promise<number>((resolve, reject) => {
   const open = indexedDB.open('voltwright-road-tests')
@@ -80,6 +82,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     const tab = await context.newPage()
     await tab.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
     await fillTheWizard(tab, 'hill-rollback.jpg')
+    await expect.poll(() => keptPage(tab)).toBe(true)
     // A reload keeps the photo with the rest, still marked as not sent.
     await tab.reload({ waitUntil: 'networkidle' })
     await tab.getByRole('button', { name: 'Hill start' }).click()
@@ -95,7 +98,11 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await expect.poll(() => tab.locator('[data-unsent]').textContent()).toContain('No connection: the road test is kept on this phone')
     expect(await tab.locator('[data-unsent]').textContent()).toContain('Its 1 photo will follow it')
     await shot(tab, 'roadside-01-not-sent')
-    await tab.reload().catch(() => {}) // with no signal the page itself cannot load again
+    // With no signal a reload still opens the wizard, from the page and code the phone kept, with the record.
+    const reloaded = await tab.reload({ waitUntil: 'load' })
+    expect(reloaded?.headers()['x-voltwright-kept']).toBe('no signal')
+    await expect.poll(() => tab.locator('[data-unsent]').textContent()).toContain('No connection: the road test is kept on this phone')
+    await shot(tab, 'roadside-01b-reloaded-without-signal')
     await tab.close() // the tester gives up and closes the tab; the record waits on the phone
     expect((await roadTests()).length).toBe(before)
     await context.unroute(`${baseUrl}/api/**`)
@@ -143,7 +150,11 @@ describe('the road test at the roadside, with little or no signal', async () => 
       await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
       await recordConditions(shared.page, { surface: 'Wet', ambientC: '9', route: 'Left on the shared phone' })
       await expect.poll(() => keptDrafts(shared.page, versionId)).toHaveLength(1)
-      await shared.page.request.post(`${baseUrl}/api/auth/logout`, { headers: { origin: baseUrl } })
+      await expect.poll(() => keptPage(shared.page)).toBe(true)
+      await shared.page.getByRole('button', { name: 'Menu' }).click()
+      await shared.page.getByRole('button', { name: 'Sign out' }).click()
+      await shared.page.waitForURL(u => u.pathname === '/login')
+      expect(await shared.page.evaluate(() => caches.keys())).toEqual([])
       await signInAs('lead@voltwright.test')
       await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
       await expect.poll(() => shared.page.getByLabel('Route').count()).toBe(1)
