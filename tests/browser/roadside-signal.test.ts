@@ -122,12 +122,17 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
     await fillTheWizard(page, 'creep-hold.jpg')
     // The photo reaches the server but its answer does not reach the phone.
+    let answerLost = () => {}
+    const lost = new Promise<void>((resolve) => { answerLost = resolve })
     await page.route('**/api/road-tests/*/photos*', async (route) => {
       await route.fetch()
       await route.abort('internetdisconnected')
+      answerLost()
     })
     await page.getByRole('button', { name: 'Save the road test' }).click()
+    await lost
     await expect.poll(() => page.locator('[data-photos-waiting]').textContent()).toContain('The road test is recorded; 1 photo not sent yet')
+    await expect.poll(() => page.getByRole('button', { name: 'Send the photos now' }).count()).toBe(1)
     await shot(page, 'roadside-03-photo-not-sent')
     const id = (await roadTests()).at(-1)!.id
     const photos = async () => ((await tester.call('GET', `/api/road-tests/${id}`)).body as { photos: unknown[] }).photos.length
