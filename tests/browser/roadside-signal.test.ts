@@ -51,6 +51,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await context.unrouteAll()
     await context.setOffline(false)
   })
+  const newest = (items: { id: number }[]) => Math.max(...items.map(t => t.id))
   const roadTests = async () => (await tester.call('GET', `/api/vehicles/${car.id}/road-tests`)).body.items as { id: number }[]
 
   it('loads the road-test page with less than 120 KiB of compressed JavaScript', async () => {
@@ -113,7 +114,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))
     const after = await roadTests()
     expect(after.length).toBe(before + 1)
-    const recorded = (await tester.call('GET', `/api/road-tests/${after.at(-1)!.id}`)).body as { photos: { filename: string, caption: string }[] }
+    const recorded = (await tester.call('GET', `/api/road-tests/${newest(after)}`)).body as { photos: { filename: string, caption: string }[] }
     expect(recorded.photos.map(p => [p.filename, p.caption])).toEqual([['hill-rollback.jpg', 'Hill start']])
     expect(await keptDrafts(page, versionId)).toEqual([])
     expect(await keptPhotos(page, versionId)).toBe(0)
@@ -136,7 +137,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await expect.poll(() => page.locator('[data-photos-waiting]').textContent()).toContain('The road test is recorded; 1 photo not sent yet')
     await expect.poll(() => page.getByRole('button', { name: 'Send the photos now' }).count()).toBe(1)
     await shot(page, 'roadside-03-photo-not-sent')
-    const id = (await roadTests()).at(-1)!.id
+    const id = newest(await roadTests())
     const photos = async () => ((await tester.call('GET', `/api/road-tests/${id}`)).body as { photos: unknown[] }).photos.length
     await expect.poll(photos).toBe(1)
     expect(await keptPhotos(page, versionId)).toBe(1)
