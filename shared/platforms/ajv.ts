@@ -17,7 +17,11 @@ export function createAjv(): Ajv2020 {
 
 let shared: Ajv2020 | null = null
 const ajv = (): Ajv2020 => (shared ??= createAjv())
-const validators = new Map<string, ValidateFunction>()
+// The most recently used validators, at most MAX_VALIDATORS of them, so that a workshop uploading schema after
+// schema cannot grow the server's memory without end; the least recently used is dropped, and ajv's own copy with it.
+export const MAX_VALIDATORS = 256
+const validators = new Map<string, { validate: ValidateFunction, schema: object }>()
+export const cachedValidatorCount = () => validators.size
 
 // FNV-1a over the schema's JSON: cheap, and enough to notice an edited schema under the same key.
 function hash(text: string): string {
@@ -31,12 +35,20 @@ function hash(text: string): string {
 export function compileParameterValidator(platform: PlatformLike): ValidateFunction | null {
   if (refusedKeywords(platform.schema).length) return null
   const key = `${platform.key}:${hash(JSON.stringify(platform.schema))}`
-  let validate = validators.get(key)
-  if (!validate) {
-    // Without $id, so an edited schema under the same id does not clash with the one compiled before.
-    const { $id: _id, ...schema } = platform.schema as Record<string, unknown>
-    validate = ajv().compile(schema)
-    validators.set(key, validate)
+  const cached = validators.get(key)
+  if (cached) {
+    validators.delete(key)
+    validators.set(key, cached)
+    return cached.validate
+  }
+  // Without $id, so an edited schema under the same id does not clash with the one compiled before.
+  const { $id: _id, ...schema } = platform.schema as Record<string, unknown>
+  const validate = ajv().compile(schema)
+  validators.set(key, { validate, schema })
+  if (validators.size > MAX_VALIDATORS) {
+    const [oldest, entry] = validators.entries().next().value!
+    validators.delete(oldest)
+    ajv().removeSchema(entry.schema)
   }
   return validate
 }

@@ -147,6 +147,16 @@ describe('malformed input never breaks a route, and a refusal names the field', 
     expect(wrong).toEqual([])
   })
 
+  it('refuses text holding U+0000, which PostgreSQL cannot store, with a 400 naming where it is', async () => {
+    const tuner = await signIn('tuner@voltwright.test')
+    const list = await tuner.call('GET', '/api/vehicles?q=%00')
+    expect(list.status).toBe(400)
+    expect(list.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['q'])
+    const body = await tuner.call('POST', '/api/vehicles', { stockRef: 'NUL\u0000', make: 'Testwick', model: 'Saloon', year: 1964 })
+    expect(body.status).toBe(400)
+    expect(body.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['stockRef'])
+  })
+
   it('answers odd queries without a server error, and a 400 names the key', async () => {
     const value = fc.oneof(fc.constantFrom(huge, '1e308', '-1e308', 'NaN', 'Infinity', '-Infinity', '', '-1', '0', '2147483648', '1.5', '../../etc', '%00', '\u0000', 'true'), fc.string({ maxLength: 30 }))
     for (const r of withQuery) {

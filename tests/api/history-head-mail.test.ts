@@ -31,6 +31,19 @@ describe('the history\'s head, mailed to the auditors', async () => {
     expect((await (await signIn(bay.emails.auditor!)).call('GET', `/api/audit/verify?head=${pasted}`)).body).toMatchObject({ ok: true, notedHead: { ok: true } })
   })
 
+  it('goes out on request at most three times in ten minutes per person, then answers 429 with when to try again', async () => {
+    const bay = await addWorkshop({ admin: ['admin'], auditor: ['auditor'] })
+    const bayAdmin = await signIn(bay.emails.admin!)
+    for (let i = 0; i < 3; i++) expect((await bayAdmin.call('POST', '/api/audit/head-mail', { to: 'me' })).status).toBe(200)
+    const refused = await bayAdmin.call('POST', '/api/audit/head-mail')
+    expect(refused.status).toBe(429)
+    expect(Number(refused.headers.get('retry-after'))).toBeGreaterThan(0)
+    // The auditor has an allowance of their own.
+    expect((await (await signIn(bay.emails.auditor!)).call('POST', '/api/audit/head-mail', { to: 'me' })).status).toBe(200)
+    const queued = await withDatabase(c => c.query(`SELECT count(*)::int AS n FROM mail_outbox WHERE "workshopId" = $1 AND subject LIKE '% on request'`, [bay.workshopId]))
+    expect(queued.rows[0].n).toBe(4)
+  })
+
   it('goes out once a day: the daily job asks every couple of seconds, on every instance, and the day\'s claim lets one mail through', async () => {
     const bay = await addWorkshop({ admin: ['admin'], auditor: ['auditor'] })
     const day = new Date().toISOString().slice(0, 10)

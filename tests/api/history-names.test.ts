@@ -39,6 +39,11 @@ describe('who acted, as they were named at the time', async () => {
     expect(text).toMatch(/Approved by\s+Orla Quint/)
     expect(text).not.toContain('Brannock')
     expect((await tuner.call('GET', `/api/vehicles/${car.id}/handover`)).body.profiles[0].people[1].name).toBe('Orla Quint')
+    // The version's own page too.
+    const version = (await tuner.call('GET', `/api/versions/${versionId}`)).body
+    expect(version.reviews.map((r: { reviewer: { name: string } }) => r.reviewer.name)).toEqual(['Orla Quint'])
+    const listed = (await tuner.call('GET', `/api/vehicles/${car.id}/profiles`)).body.items[0].versions[0]
+    expect(listed.lastReview.reviewer.name).toBe('Orla Quint')
 
     // The rename itself is in the workshop's history, by the manager, with the old name as before.
     const events = (await auditor.call('GET', '/api/audit/events?action=user.renamed')).body.items

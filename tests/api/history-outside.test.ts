@@ -79,6 +79,13 @@ describe('the history, checked from outside with the documentation only', async 
     for (const e of page.items as Entry[]) expect(hashOf(e)).toBe(e.hash)
     expect((await auditor.call('GET', `/api/vehicles/${car.id}/history`)).body.items[0].record).toBeUndefined()
     expect((await auditor.call('GET', `/api/vehicles/${car.id}/history?include=everything`)).status).toBe(400)
+    // The records carry colleagues' e-mails: the people who read the history in words do not get them.
+    const tuner = await signIn('tuner@voltwright.test')
+    const engineer = await signIn('engineer@voltwright.test')
+    expect((await tuner.call('GET', `/api/vehicles/${car.id}/history?include=record`)).status).toBe(403)
+    expect((await tuner.call('GET', `/api/vehicles/${car.id}/history`)).status).toBe(200)
+    expect((await engineer.call('GET', '/api/audit/events?include=record')).status).toBe(403)
+    expect((await (await signIn('admin@voltwright.test')).call('GET', '/api/audit/events?include=record&limit=1')).status).toBe(200)
   })
 
   it('the shipped script says OK for the demo workshop', async () => {

@@ -91,4 +91,16 @@ describe('roadside changes in the version lifecycle', async () => {
     // It goes on through review like any other version.
     expect((await lead.call('POST', `/api/versions/${res.body.id}/approve`, { comment: 'ok' })).status).toBe(200)
   })
+
+  it('holds the tested version\'s sign-off while the change made on that drive is undecided, and lets it go once the change is sent back', async () => {
+    const { roadTestId, risky, dangers } = await openRoadTest()
+    const change = await tester.call('POST', `/api/road-tests/${roadTestId}/roadside-version`, { parameters: risky, rationale: 'Tried more regen on the descent', justifications: reasons(dangers) })
+    expect(change.status).toBe(201)
+    const held = await tester.call('POST', `/api/road-tests/${roadTestId}/sign-off`)
+    expect(held.status).toBe(409)
+    expect(held.body.data.missing.map((m: { code: string }) => m.code)).toEqual(['roadside-change-open'])
+    expect(held.body.message).toContain(`v${change.body.versionNo}`)
+    expect((await engineer.call('POST', `/api/versions/${change.body.id}/reject`, { comment: 'Too much for this car; put the tested values back' })).status).toBe(200)
+    expect((await tester.call('POST', `/api/road-tests/${roadTestId}/sign-off`)).status).toBe(200)
+  })
 })

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { compileParameterValidator, createAjv, validatePlatform, validatePlatformSchema } from '../../shared/platforms/ajv'
+import { cachedValidatorCount, compileParameterValidator, createAjv, MAX_VALIDATORS, validatePlatform, validatePlatformSchema } from '../../shared/platforms/ajv'
 import { defaultParameters, marrick110, fenlow45, platforms } from '../../shared/platforms/index'
 
 const clone = <T>(x: T): T => structuredClone(x)
@@ -134,4 +134,21 @@ describe('compileParameterValidator', () => {
     expect(() => createAjv().compile({ type: 'number', unit: 'kW' })).not.toThrow()
     expect(() => createAjv().compile({ type: 'number', unit: '' })).toThrow()
   })
+})
+
+describe('compileParameterValidator', () => {
+  it('compiles a schema once, and keeps no more validators than its limit however many schemas come', () => {
+    const first = compileParameterValidator(fenlow45)
+    expect(compileParameterValidator(fenlow45)).toBe(first)
+    // Small schemas, each its own, as a workshop uploading one after another would send.
+    for (let i = 0; i < MAX_VALIDATORS + 40; i++) {
+      const schema = { type: 'object', properties: { powerCapKw: { type: 'number', maximum: 100 + i } } }
+      const validate = compileParameterValidator({ ...fenlow45, key: `uploaded-${i}`, schema: schema as never })!
+      expect(validate({ powerCapKw: 100 + i })).toBe(true)
+      expect(validate({ powerCapKw: 101 + i })).toBe(false)
+    }
+    expect(cachedValidatorCount()).toBe(MAX_VALIDATORS)
+    // The least recently used was dropped and is compiled afresh when it is needed again.
+    expect(compileParameterValidator(fenlow45)).not.toBe(first)
+  }, 30_000)
 })

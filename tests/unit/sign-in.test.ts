@@ -1,6 +1,6 @@
 import { describe, expect, it, vi } from 'vitest'
 import { checkPassword } from '../../server/utils/people/password-check'
-import { clientAddress, trustedProxies } from '../../server/utils/people/client-address'
+import { clientAddress, isTrustedPeer, trustedProxies } from '../../server/utils/people/client-address'
 import { delaySeconds, SIGN_IN_DELAYS } from '../../server/utils/people/sign-in-delays'
 
 describe('checkPassword hashes once whatever the account', () => {
@@ -45,6 +45,13 @@ describe('clientAddress', () => {
     expect(clientAddress('127.0.0.1', 'not-an-address', trusted)).toBe('127.0.0.1')
     expect(clientAddress('127.0.0.1', '198.51.100.1', trustedProxies(''))).toBe('127.0.0.1')
     expect(() => trustedProxies('10.0.0.0/8, proxy.local')).toThrow(/proxy.local/)
+  })
+
+  it('believes a peer\'s forwarded headers (X-Forwarded-Proto for HSTS) only when the peer is a trusted proxy', () => {
+    expect(isTrustedPeer(trusted, '::ffff:10.4.5.6')).toBe(true)
+    expect(isTrustedPeer(trusted, '203.0.113.9')).toBe(false)
+    expect(isTrustedPeer(trusted, undefined)).toBe(false)
+    expect(isTrustedPeer(trustedProxies(''), '127.0.0.1')).toBe(false)
   })
 })
 

@@ -4,5 +4,6 @@ import { activityQuerySchema } from '../../../shared/schemas/history'
 export default defineEventHandler(async (event) => {
   const user = await requirePermission(event, 'activity.read')
   const { vehicleId, ...query } = await getValidatedQuery(event, zodValidator(activityQuerySchema))
+  requireRecordAccess(user, query.include)
   return readHistory({ workshopId: user.workshopId, vehicleId }, query)
 })

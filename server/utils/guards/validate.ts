@@ -17,9 +17,30 @@ class ValidationFailure extends Error {
   }
 }
 
+// PostgreSQL's text cannot hold the character U+0000, so a value or key carrying one is refused where it comes
+// in, naming where it is, before it can reach a query and fail there (at most 20 named). No schema nests
+// deeper than MAX_DEPTH, so what lies deeper is left to the schema, which refuses it.
+const MAX_DEPTH = 16
+export function nulFields(input: unknown, path: string[] = [], out: FieldError[] = []): FieldError[] {
+  if (out.length >= 20 || path.length > MAX_DEPTH) return out
+  const here = () => path.join('.') || '(body)'
+  if (typeof input === 'string') {
+    if (input.includes('\u0000')) out.push({ path: here(), message: 'Holds a character that cannot be stored (U+0000)' })
+  } else if (input && typeof input === 'object') {
+    for (const [k, v] of Object.entries(input)) {
+      if (k.includes('\u0000')) out.push({ path: [...path, k.replaceAll('\u0000', '')].join('.'), message: 'A name that holds a character that cannot be stored (U+0000)' })
+      else nulFields(v, [...path, k], out)
+      if (out.length >= 20) break
+    }
+  }
+  return out
+}
+
 // For getValidatedQuery / readValidatedBody / getValidatedRouterParams: a 400 naming every field at fault.
 export function zodValidator<S extends z.ZodType>(schema: S) {
   return (input: unknown): z.output<S> => {
+    const nul = nulFields(input)
+    if (nul.length) throw new ValidationFailure(nul)
     const result = schema.safeParse(input)
     if (result.success) return result.data
     throw new ValidationFailure(zodFieldErrors(result.error))
@@ -29,8 +50,9 @@ export function zodValidator<S extends z.ZodType>(schema: S) {
 
 // The same answer for a body read another way (e.g. readSmallJsonBody): a 400 naming every field at fault.
 export function parseOr400<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
-  const result = schema.safeParse(input)
-  if (result.success) return result.data
-  const fields = zodFieldErrors(result.error)
+  const nul = nulFields(input)
+  const result = nul.length ? null : schema.safeParse(input)
+  if (result?.success) return result.data
+  const fields = result ? zodFieldErrors(result.error) : nul
   throw createError({ statusCode: 400, message: summary(fields), data: { fields } })
 }

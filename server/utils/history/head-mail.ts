@@ -1,3 +1,4 @@
+import type { H3Event } from 'h3'
 import { QueryTypes, type Transaction } from 'sequelize'
 import type { SignedIn } from '../guards/guards'
 import { absoluteUrl, peopleWithRole, queueMail } from '../mail/outbox'
@@ -28,9 +29,27 @@ async function mailHead(t: Transaction, h: Head, day: string | null, extra: stri
 const HEAD_SQL = `SELECT w.id AS "workshopId", w.name AS "workshopName", h.id AS "headId", h.hash AS "headHash" FROM workshops w
   LEFT JOIN LATERAL (SELECT id, hash FROM audit_events WHERE "workshopId" = w.id ORDER BY id DESC LIMIT 1) h ON true`
 
+// On request a person may send ON_REQUEST_LIMIT mails in ON_REQUEST_WINDOW_MIN minutes, so nobody can flood the
+// auditors' inboxes; counted from the outbox (the asker always gets a copy), one request at a time per workshop.
+export const ON_REQUEST_LIMIT = 3
+const ON_REQUEST_WINDOW_MIN = 10
+
+async function requireOnRequestAllowance(event: H3Event, t: Transaction, user: SignedIn) {
+  await useDatabase().query('SELECT pg_advisory_xact_lock(hashtext(\'head-mail\'), :w)', { replacements: { w: user.workshopId }, transaction: t })
+  const [row] = await useDatabase().query<{ n: number, oldest: Date | null }>(
+    `SELECT count(*)::int AS n, min("createdAt") AS oldest FROM mail_outbox
+      WHERE "workshopId" = :w AND "to" = :email AND subject LIKE '% on request' AND "createdAt" > now() - make_interval(mins => :window)`,
+    { replacements: { w: user.workshopId, email: user.email, window: ON_REQUEST_WINDOW_MIN }, type: QueryTypes.SELECT, transaction: t })
+  if (row!.n < ON_REQUEST_LIMIT) return
+  const wait = Math.max(1, Math.ceil((new Date(row!.oldest!).getTime() + ON_REQUEST_WINDOW_MIN * 60_000 - Date.now()) / 1000))
+  setResponseHeader(event, 'Retry-After', wait)
+  throw createError({ statusCode: 429, message: `At most ${ON_REQUEST_LIMIT} history-head mails on request every ${ON_REQUEST_WINDOW_MIN} minutes: the next can go in ${Math.ceil(wait / 60)} min.` })
+}
+
 // On request: the head now, to the workshop's auditors and to whoever asked, or to the asker only.
-export async function mailHeadNow(user: SignedIn, to: 'auditors' | 'me') {
+export async function mailHeadNow(event: H3Event, user: SignedIn, to: 'auditors' | 'me') {
   return useDatabase().transaction(async (t) => {
+    await requireOnRequestAllowance(event, t, user)
     const [h] = await useDatabase().query<Head>(`${HEAD_SQL} WHERE w.id = :w`, { replacements: { w: user.workshopId }, type: QueryTypes.SELECT, transaction: t })
     const sentTo = await mailHead(t, h!, null, [user.email], to === 'auditors')
     return { head: h!.headId ? { id: String(h!.headId), hash: h!.headHash! } : null, sentTo }

@@ -1,6 +1,8 @@
 import type { HistoryEntry, HistoryPage, HistoryQuery } from '../../../shared/schemas/history'
 import { changeRows, copyState, creationRows, eventDetails, foldEvent, foldSource, isPatch, type KnownState } from '../../../shared/utils/audit-changes'
+import { can } from '../../../shared/utils/permissions'
 import { selectRows } from '../database/db'
+import type { SignedIn } from '../guards/guards'
 import { hashedRecord, type RecordedActor } from './audit'
 import { eventNames } from './names'
 import { parentSettings } from './parents'
@@ -107,6 +109,13 @@ async function toEntries(workshopId: number, rows: EventRow[], complete: boolean
     details: eventDetails(r.data), names: names[i]!, hash: r.hash, prevHash: r.prevHash, form: r.form,
     ...(withRecord ? { record: hashedRecord(r) } : {})
   }))
+}
+
+// The hashed records carry each actor's e-mail as it was: for those who check the chain (docs/history.md#checking-it-yourself-with-the-documentation-only).
+export function requireRecordAccess(user: SignedIn, include: string | undefined) {
+  if (include === 'record' && !can(user.roles, 'history.verify')) {
+    throw createError({ statusCode: 403, message: 'The hashed records are for the auditors and the workshop manager.' })
+  }
 }
 
 // Newest first, keyset-paged by id: a page never repeats or skips an event, however many arrive meanwhile.

@@ -10,6 +10,7 @@ import { appendAuditEvent } from '../history/audit'
 import { findWorkshopPlatform } from '../platforms/platforms'
 import { insertProfile } from '../versions/create'
 import { insertVersion } from '../versions/insert'
+import { withRecordedPeople } from '../history/recorded-names'
 import { authorInclude, reviewsInclude, versionSummary } from '../versions/views'
 import { profileBaselines } from './baseline'
 
@@ -48,7 +49,7 @@ export async function readKit(user: SignedIn, id: number): Promise<KitView> {
   const baselines = await profileBaselines(profiles)
   const moved = (carId: number) => profiles.some(p => p.vehicleId === carId && baselines.get(p.id)?.moved)
   return {
-    ...head!, specTemplate: kit.specTemplate, versions: versions.map(versionSummary),
+    ...head!, specTemplate: kit.specTemplate, versions: await withRecordedPeople(user.workshopId, versions.map(versionSummary)),
     cars: cars.map(c => ({ id: c.id, stockRef: c.stockRef, make: c.make, model: c.model, year: c.year, status: c.status, onLatest: !moved(c.id) }))
   }
 }

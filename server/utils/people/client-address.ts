@@ -25,6 +25,9 @@ const isTrusted = (trusted: BlockList, address: string) => {
   return family !== 0 && trusted.check(address, family === 6 ? 'ipv6' : 'ipv4')
 }
 
+// Whether the direct peer is one of the trusted proxies.
+export const isTrustedPeer = (trusted: BlockList, peer: string | undefined) => isTrusted(trusted, normaliseAddress(peer ?? ''))
+
 // The direct peer, unless it is a trusted proxy: then X-Forwarded-For is read from the right, past every
 // trusted proxy, to the first address that is not one. Anyone else's X-Forwarded-For is ignored.
 export function clientAddress(peer: string | undefined, forwardedFor: string | undefined, trusted: BlockList): string {

@@ -2,17 +2,15 @@ import type { H3Event } from 'h3'
 import { QueryTypes } from 'sequelize'
 import { LoginAttempt } from '../../models'
 import { useDatabase } from '../database/db'
-import { clientAddress, trustedProxies } from './client-address'
+import { clientAddress } from './client-address'
+import { trustedProxiesOf } from './proxies'
 import { delaySeconds, SIGN_IN_DELAYS, type Scope } from './sign-in-delays'
 
 // Waits between failed sign-ins in ./sign-in-delays; kept in PostgreSQL, so every instance sees the same.
 const WINDOW_MS = 15 * 60 * 1000
 
-let proxies: { list: string, trusted: ReturnType<typeof trustedProxies> } | undefined
 export function signInClient(event: H3Event): string {
-  const list = String(useRuntimeConfig(event).trustedProxies ?? '')
-  if (proxies?.list !== list) proxies = { list, trusted: trustedProxies(list) }
-  return clientAddress(event.node.req.socket.remoteAddress, getRequestHeader(event, 'x-forwarded-for'), proxies.trusted).slice(0, 64)
+  return clientAddress(event.node.req.socket.remoteAddress, getRequestHeader(event, 'x-forwarded-for'), trustedProxiesOf(event)).slice(0, 64)
 }
 
 type Row = Record<`${Scope}_n`, number> & Record<`${Scope}_last`, Date | null>

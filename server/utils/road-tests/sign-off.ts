@@ -47,6 +47,14 @@ async function whatIsMissing(user: SignedIn, rt: RoadTest, version: ProfileVersi
     const state = check ? checkVerdictLabels[check.verdict as CheckVerdict].toLowerCase() : 'missing'
     missing.push({ code: 'check-not-passed', check: key, message: `The ${key} check is ${state}.` })
   }
+  // Settings changed at the roadside during this drive are what the controller may now hold: the tested
+  // version cannot go on the record as the car's until that change is sent back or withdrawn
+  // (docs/version-lifecycle.md#roadside).
+  const roadside = await ProfileVersion.findAll({ where: { roadTestId: rt.id, origin: 'roadside', state: ['draft', 'in-review', 'approved'] }, attributes: ['versionNo', 'state'], order: [['versionNo', 'ASC']], transaction })
+  for (const r of roadside) {
+    const what = r.state === 'approved' ? 'was approved: road-test it and sign that off instead' : 'awaits review: the engineer decides it first'
+    missing.push({ code: 'roadside-change-open', message: `The change made at the roadside during this drive (v${r.versionNo}) ${what}.` })
+  }
   const blocking = await Snag.findAll({ where: { vehicleId: rt.vehicleId, blocking: true, status: unresolvedSnagStatuses }, attributes: ['id', 'title'], order: [['id', 'ASC']], transaction })
   if (blocking.length) {
     missing.push({ code: 'blocking-snags', snags: blocking.map(s => ({ id: s.id, title: s.title })), message: `${blocking.length} blocking snag${blocking.length === 1 ? ' is' : 's are'} still open: ${blocking.map(s => `“${s.title}”`).join(', ')}.` })

@@ -3,7 +3,7 @@ import { Profile, ProfileVersion, Review, User, type Vehicle } from '../../model
 import type { SignedIn } from '../guards/guards'
 import type { EvaluationSnapshot, HistoryEntry, ProfileView, VersionView } from '../../../shared/schemas/profile-views'
 import { useDatabase } from '../database/db'
-import { ACTOR_NAME_SQL } from '../history/recorded-names'
+import { ACTOR_NAME_SQL, withRecordedPeople } from '../history/recorded-names'
 import { vehicleView } from '../fleet/vehicles'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { profileBaselines } from '../kits/baseline'
@@ -35,8 +35,12 @@ export async function readVersion(user: SignedIn, id: number): Promise<VersionVi
   ])
   v.author = author ?? undefined
   const { lastReview: _last, ...summary } = versionSummary(v)
+  // People as the history named them when they acted, so renaming someone later does not rewrite this page.
+  const asRecorded = (e: HistoryEntry | undefined, today: { id: number, name: string } | null) => (e?.actor?.name ? e.actor : today)
+  const decisions = history.filter(h => h.action === 'version.approved' || h.action === 'version.rejected')
   return {
     ...summary,
+    author: asRecorded(history.find(h => h.action === 'version.created'), summary.author),
     parameters: v.parameters,
     justifications: v.justifications,
     evaluation: v.evaluation as EvaluationSnapshot | null,
@@ -49,7 +53,8 @@ export async function readVersion(user: SignedIn, id: number): Promise<VersionVi
     baselineVersionId: v.baselineVersionId ?? null,
     platform: { key: platform.key, name: platform.name, motorMaxRpm: platform.motorMaxRpm, torqueConstantNmPerA: platform.torqueConstantNmPerA ?? null, schema: platform.schema },
     parent: parent ? { id: parent.id, versionNo: parent.versionNo } : null,
-    reviews: reviews.map(reviewView),
+    // Each review is written in the one transaction with its decision's event, so they pair in order.
+    reviews: reviews.map((r, i) => { const view = reviewView(r); return { ...view, reviewer: asRecorded(decisions[i], view.reviewer) } }),
     history,
     liveEvaluation: evaluateOnServer(subject.spec, platform, v.parameters, settings)
   }
@@ -62,10 +67,14 @@ export async function listProfiles(user: SignedIn, vehicle: Vehicle): Promise<{ 
     include: [{ model: ProfileVersion, as: 'versions', include: [authorInclude, reviewsInclude] }],
     order: [['name', 'ASC'], [{ model: ProfileVersion, as: 'versions' }, 'versionNo', 'DESC']]
   })
-  const baselines = await profileBaselines(profiles)
+  const [baselines, summaries] = await Promise.all([
+    profileBaselines(profiles),
+    withRecordedPeople(user.workshopId, profiles.flatMap(p => (p.versions ?? []).map(versionSummary)))
+  ])
+  const summaryOf = new Map(summaries.map(s => [s.id, s]))
   const items = profiles.map(p => ({
     id: p.id, vehicleId: vehicle.id, name: p.name, onCarVersionId: p.onCarVersionId,
-    versions: (p.versions ?? []).map(versionSummary), baseline: baselines.get(p.id) ?? null
+    versions: (p.versions ?? []).map(v => summaryOf.get(v.id)!), baseline: baselines.get(p.id) ?? null
   }))
   return { items, total: items.length }
 }

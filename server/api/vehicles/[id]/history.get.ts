@@ -5,5 +5,6 @@ export default defineEventHandler(async (event) => {
   const { id } = await getValidatedRouterParams(event, zodValidator(idParamSchema))
   const query = await getValidatedQuery(event, zodValidator(historyQuerySchema))
   const user = await requireVehicleAccess(event, id, 'staff')
+  requireRecordAccess(user, query.include)
   return readHistory({ workshopId: user.workshopId, vehicleId: id }, query)
 })
