@@ -6,6 +6,7 @@ import sharp from 'sharp'
 import { useRunningServer, signIn, anonymous, withDatabase, baseUrl, type Caller, type Answer } from './helpers'
 import { approvedVersion, multipart, newCar, newProfile, recordRoadTest, upload } from './road-test-fixtures'
 import { addSnag } from './fixtures'
+import { testSpec } from './version-fixtures'
 import { syntheticDrive, telemetryCsv } from '../../shared/telemetry/synthetic'
 import { apiDir, routeFiles, routeUrl, type Route } from './routes'
 import { demoFixtures, routeAccess } from './route-access'
@@ -152,7 +153,7 @@ describe('malformed input never breaks a route, and a refusal names the field', 
     const list = await tuner.call('GET', '/api/vehicles?q=%00')
     expect(list.status).toBe(400)
     expect(list.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['q'])
-    const body = await tuner.call('POST', '/api/vehicles', { stockRef: 'NUL\u0000', make: 'Testwick', model: 'Saloon', year: 1964 })
+    const body = await tuner.call('POST', '/api/vehicles', { stockRef: 'NUL\u0000', make: 'Testwick', model: 'Saloon', year: 1964, platformKey: 'fenlow-45', spec: testSpec })
     expect(body.status).toBe(400)
     expect(body.body.data.fields.map((f: { path: string }) => f.path)).toEqual(['stockRef'])
   })

@@ -18,7 +18,8 @@ class ValidationFailure extends Error {
 }
 
 // PostgreSQL's text cannot hold the character U+0000, so a value or key carrying one is refused where it comes
-// in, naming where it is, before it can reach a query and fail there (at most 20 named). No schema nests
+// in, naming where it is, before it can reach a query and fail there (at most 20 named). Looked for in what
+// the schema let through, so a field the schema drops does not hide the one it refuses. No schema nests
 // deeper than MAX_DEPTH, so what lies deeper is left to the schema, which refuses it.
 const MAX_DEPTH = 16
 export function nulFields(input: unknown, path: string[] = [], out: FieldError[] = []): FieldError[] {
@@ -37,22 +38,23 @@ export function nulFields(input: unknown, path: string[] = [], out: FieldError[]
 }
 
 // For getValidatedQuery / readValidatedBody / getValidatedRouterParams: a 400 naming every field at fault.
-export function zodValidator<S extends z.ZodType>(schema: S) {
+// `nulCheck: false` only where a loose first look is followed by a full check that refuses every name it does
+// not know and every value that is not a number (the workshop's settings), so that check names the field.
+export function zodValidator<S extends z.ZodType>(schema: S, { nulCheck = true }: { nulCheck?: boolean } = {}) {
   return (input: unknown): z.output<S> => {
-    const nul = nulFields(input)
-    if (nul.length) throw new ValidationFailure(nul)
     const result = schema.safeParse(input)
-    if (result.success) return result.data
-    throw new ValidationFailure(zodFieldErrors(result.error))
+    if (!result.success) throw new ValidationFailure(zodFieldErrors(result.error))
+    const nul = nulCheck ? nulFields(result.data) : []
+    if (nul.length) throw new ValidationFailure(nul)
+    return result.data
   }
 }
 
 
 // The same answer for a body read another way (e.g. readSmallJsonBody): a 400 naming every field at fault.
 export function parseOr400<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
-  const nul = nulFields(input)
-  const result = nul.length ? null : schema.safeParse(input)
-  if (result?.success) return result.data
-  const fields = result ? zodFieldErrors(result.error) : nul
+  const result = schema.safeParse(input)
+  const fields = result.success ? nulFields(result.data) : zodFieldErrors(result.error)
+  if (result.success && !fields.length) return result.data
   throw createError({ statusCode: 400, message: summary(fields), data: { fields } })
 }

@@ -49,7 +49,7 @@ async function whatIsMissing(user: SignedIn, rt: RoadTest, version: ProfileVersi
   }
   // Settings changed at the roadside during this drive are what the controller may now hold: the tested
   // version cannot go on the record as the car's until that change is sent back or withdrawn
-  // (docs/version-lifecycle.md#roadside).
+  // (docs/version-lifecycle.md#roadside-changes).
   const roadside = await ProfileVersion.findAll({ where: { roadTestId: rt.id, origin: 'roadside', state: ['draft', 'in-review', 'approved'] }, attributes: ['versionNo', 'state'], order: [['versionNo', 'ASC']], transaction })
   for (const r of roadside) {
     const what = r.state === 'approved' ? 'was approved: road-test it and sign that off instead' : 'awaits review: the engineer decides it first'
