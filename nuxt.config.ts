@@ -72,6 +72,8 @@ export default defineNuxtConfig({
         'img-src': ["'self'", 'data:', 'blob:'],
         'font-src': ["'self'", 'data:'],
         'connect-src': ["'self'"],
+        // The road-test wizard's service worker (public/roadside-sw.js).
+        'worker-src': ["'self'"],
         'object-src': ["'none'"],
         'base-uri': ["'none'"],
         'form-action': ["'self'"],

@@ -3,8 +3,10 @@ import type { ExtraCheckDraft } from '~/components/road-test/RoadTestExtraChecks
 
 // The road test being entered, kept on the phone as it goes (localStorage), so a reload, a closed tab or a
 // lost signal loses nothing. Its send key is made when the record is begun and goes with every send, so the
-// server records it once however often it is sent. Photos stay in the page's memory only. The workshop's own
-// checks are kept beside the six drive checks.
+// server records it once however often it is sent. Photos are kept in IndexedDB (app/utils/kept-photos.ts) and
+// the draft names them; it is forgotten once the record and every photo have reached the server. Drafts are
+// kept per person, so the next person on a shared phone neither sees nor sends another's road test. The
+// workshop's own checks are kept beside the six drive checks.
 export interface RoadTestDraftState {
   idempotencyKey: string
   conditions: { surface: string, ambientC: number | null, route: string }
@@ -14,9 +16,11 @@ export interface RoadTestDraftState {
   step: number
   // Sent and not yet answered, or waiting for the connection: sent again when the page can.
   unsent: boolean
+  // The record the server made of it, while photos taken for it still wait to be sent.
+  recordId: number | null
 }
 
-const storageKey = (versionId: number) => `voltwright:road-test:${versionId}`
+export const roadTestDraftKey = (owner: number, versionId: number) => `voltwright:road-test:${owner}:${versionId}`
 
 const freshExtra = (key: string): ExtraCheckDraft => ({ key, verdict: '', value: null, note: '' })
 
@@ -26,7 +30,7 @@ export function freshRoadTestDraft(keys: readonly string[], extraKeys: readonly 
     conditions: { surface: '', ambientC: null, route: '' },
     checks: keys.map(key => ({ key, verdict: '', values: {}, note: '', photos: [] })),
     extras: extraKeys.map(freshExtra),
-    verdict: '', step: 0, unsent: false
+    verdict: '', step: 0, unsent: false, recordId: null
   }
 }
 
@@ -40,26 +44,33 @@ export function keptExtras(kept: unknown, extraKeys: readonly string[]): ExtraCh
   })
 }
 
-export function useRoadTestDraft(versionId: number, keys: readonly string[], extraKeys: readonly string[] = []) {
+export function useRoadTestDraft(owner: number, versionId: number, keys: readonly string[], extraKeys: readonly string[] = []) {
+  const storageKey = () => roadTestDraftKey(owner, versionId)
   const draft = ref<RoadTestDraftState>(freshRoadTestDraft(keys, extraKeys))
   const restored = ref(false)
   let stopKeeping = () => {}
   onMounted(() => {
     try {
-      const kept = JSON.parse(localStorage.getItem(storageKey(versionId)) ?? 'null') as RoadTestDraftState | null
+      const kept = JSON.parse(localStorage.getItem(storageKey()) ?? 'null') as RoadTestDraftState | null
       if (kept?.idempotencyKey) {
-        draft.value = { ...draft.value, ...kept, checks: kept.checks.map(c => ({ ...c, photos: [] })), extras: keptExtras(kept.extras, extraKeys) }
+        // A photo that lived in the closed page only is gone; the ones in IndexedDB are still named.
+        draft.value = {
+          ...draft.value, ...kept, recordId: kept.recordId ?? null,
+          checks: kept.checks.map(c => ({ ...c, photos: (c.photos ?? []).filter(p => p.kept) })),
+          extras: keptExtras(kept.extras, extraKeys)
+        }
         restored.value = true
       }
     } catch { /* a draft that does not read is started afresh */ }
     stopKeeping = watch(draft, (d) => {
-      localStorage.setItem(storageKey(versionId), JSON.stringify({ ...d, checks: d.checks.map(c => ({ ...c, photos: [] })) }))
+      localStorage.setItem(storageKey(), JSON.stringify(d))
     }, { deep: true, immediate: true })
+    void dropStrayPhotos(owner, versionId, draft.value.idempotencyKey)
   })
   // Once the server has the record the phone keeps nothing of it, and writes no more.
   const forget = () => {
     stopKeeping()
-    localStorage.removeItem(storageKey(versionId))
+    localStorage.removeItem(storageKey())
   }
   return { draft, restored, forget }
 }

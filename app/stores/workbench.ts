@@ -14,11 +14,13 @@ export const useWorkbenchStore = defineStore('workbench', () => {
 
   async function signIn(email: string, password: string) {
     await $fetch('/api/auth/login', { method: 'POST', body: { email, password } })
+    await forgetKeptPages()
     await refreshSession()
   }
 
   async function signOut() {
     await $fetch('/api/auth/logout', { method: 'POST' })
+    await forgetKeptPages()
     await clear()
     await navigateTo('/login')
   }

@@ -58,9 +58,11 @@ export function bytesText(bytes: number): string {
 const codeWords: Record<string, string> = {
   ...vehicleStatusLabels, ...versionStateLabels, ...snagStatusLabels, ...snagKindLabels, ...snagPriorityLabels,
   ...surfaceLabels, ...checkVerdictLabels, ...roleLabels, workshop: 'In the workshop', roadside: 'At the roadside',
-  file: 'A file from the controller', paste: 'Pasted from the controller', typed: 'Typed in by hand'
+  file: 'A file from the controller', paste: 'Pasted from the controller', typed: 'Typed in by hand',
+  // How a workshop's own road-test check is recorded.
+  'pass-fail': 'Pass or fail', 'number': 'A measured number'
 }
-const codeKeys = new Set(['status', 'state', 'from', 'to', 'fromState', 'kind', 'priority', 'surface', 'verdict', 'roles', 'origin', 'source'])
+const codeKeys = new Set(['status', 'state', 'from', 'to', 'fromState', 'kind', 'priority', 'surface', 'verdict', 'roles', 'origin', 'source', 'record'])
 
 export const stageWords = (code: unknown) => typeof code === 'string' ? (vehicleStatusLabels as Record<string, string>)[code]?.toLowerCase() ?? code : 'unknown'
 

@@ -32,7 +32,12 @@ const snagLabels: Record<string, string> = {
 const userLabels: Record<string, string> = { '/name': 'Name', '/email': 'E-mail', '/roles': 'Roles', '/active': 'Can sign in' }
 const platformLabels: Record<string, string> = { '/name': 'Name', '/key': 'Short name', '/motorMaxRpm': 'Highest motor speed, rpm' }
 
-const byEntity: Record<string, Record<string, string>> = { vehicle: carLabels, version: versionLabels, workshop: settingLabels, snag: snagLabels, user: userLabels, platform: platformLabels }
+const checkLabels: Record<string, string> = {
+  '/key': 'Short name', '/label': 'Check', '/record': 'Recorded as', '/unit': 'Unit', '/min': 'Lowest allowed',
+  '/max': 'Highest allowed', '/required': 'Required on every road test', '/retired': 'Retired', '/platformKeys': 'Only for drive units (none: every one)'
+}
+
+const byEntity: Record<string, Record<string, string>> = { 'vehicle': carLabels, 'version': versionLabels, 'workshop': settingLabels, 'snag': snagLabels, 'user': userLabels, 'platform': platformLabels, 'workshop-check': checkLabels }
 
 // A curve's point of a version's setting: "/parameters/throttleMap/2/y" is "Throttle map, point 3, torque".
 const curveProps = Object.fromEntries(platforms.flatMap(p => Object.entries(schemaProperties(p.schema))).filter(([, p]) => p.type === 'array'))

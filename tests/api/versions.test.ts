@@ -235,6 +235,17 @@ describe('profiles and versions: drafts, review and every refusal', async () => 
     await tuner.call('POST', `/api/profiles/${second.profileId}/versions`, { fromVersionId: second.id })
     const after = (await tuner.call('GET', '/api/worklist/drafts')).body.items
     expect(after.some((d: { versionId: number }) => d.versionId === second.id)).toBe(false)
+    // Started again from an earlier version, the later version overtakes the one sent back just the same.
+    await engineer.call('POST', `/api/versions/${first.id}/reject`, { comment: 'Start from the kit figures.' })
+    const retry = (await tuner.call('POST', `/api/profiles/${first.profileId}/versions`, { fromVersionId: first.id })).body
+    await tuner.call('POST', `/api/versions/${retry.id}/submit`, {})
+    await engineer.call('POST', `/api/versions/${retry.id}/reject`, { comment: 'Still too much creep.' })
+    const again = (await tuner.call('POST', `/api/profiles/${first.profileId}/versions`, { fromVersionId: first.id })).body
+    expect(again.parentVersionId).toBe(first.id)
+    const overtaken = (await tuner.call('GET', '/api/worklist/drafts')).body.items.map((d: { versionId: number }) => d.versionId)
+    expect(overtaken).toContain(again.id)
+    expect(overtaken).not.toContain(retry.id)
+    expect(overtaken).not.toContain(first.id)
     expect((await engineer.call('GET', '/api/worklist/drafts')).status).toBe(403)
   })
 })

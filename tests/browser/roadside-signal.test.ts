@@ -1,5 +1,6 @@
 import { describe, it, expect, afterAll, afterEach } from 'vitest'
 import type { Page } from 'playwright-core'
+import sharp from 'sharp'
 import { launch, baseUrl, shot } from './helpers'
 import { passTheRest, recordConditions, recordHillStart, recordLiftOff } from './steps'
 import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
@@ -7,12 +8,35 @@ import { approvedVersion, newCar, newProfile, PLATFORM } from '../api/road-test-
 
 const JS_BUDGET = 120 * 1024 // compressed JavaScript for the road-test page, as sent over the wire
 
-async function fillTheWizard(page: Page) {
+const photo = async (name: string) => ({ name, mimeType: 'image/jpeg', buffer: await sharp({ create: { width: 64, height: 48, channels: 3, background: '#b87333' } }).jpeg().toBuffer() })
+
+async function fillTheWizard(page: Page, photoName?: string) {
   await recordConditions(page, { surface: 'Wet', ambientC: '9', route: 'Quarry Lane, no signal at the top' })
   await recordHillStart(page, '16', '50')
+  if (photoName) {
+    await page.locator('input[type=file]').setInputFiles(await photo(photoName))
+    await expect.poll(() => page.locator('[data-photos-unsent]').textContent()).toContain(`${photoName}`)
+  }
   await recordLiftOff(page, 'gentle')
   await passTheRest(page)
 }
+
+// What the phone still keeps of road tests: the wizard's page in the worker's cache, drafts in localStorage,
+// photos in IndexedDB.
+const keptPage = (page: Page) => page.evaluate(async () => Boolean(await (await caches.open('voltwright-roadside-v1')).match(location.href)))
+const keptDrafts = (page: Page, versionId: number) => page.evaluate(id => Object.keys(localStorage).filter(k => k.startsWith('voltwright:road-test:') && k.endsWith(`:${id}`)), versionId)
+const keptPhotos = (page: Page, versionId: number) => page.evaluate(id => new Promise<number>((resolve, reject) => {
+  const open = indexedDB.open('voltwright-road-tests')
+  // Looking must not create the database: the product's store would then never be made in it.
+  open.onupgradeneeded = () => open.transaction?.abort()
+  open.onerror = () => (open.error?.name === 'AbortError' ? resolve(0) : reject(open.error))
+  open.onsuccess = () => {
+    const db = open.result
+    if (!db.objectStoreNames.contains('photos')) return resolve(0)
+    const all = db.transaction('photos').objectStore('photos').getAll()
+    all.onsuccess = () => resolve((all.result as { versionId: number }[]).filter(p => p.versionId === id).length)
+  }
+}), versionId)
 
 describe('the road test at the roadside, with little or no signal', async () => {
   await useRunningServer()
@@ -27,6 +51,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await context.unrouteAll()
     await context.setOffline(false)
   })
+  const newest = (items: { id: number }[]) => Math.max(...items.map(t => t.id))
   const roadTests = async () => (await tester.call('GET', `/api/vehicles/${car.id}/road-tests`)).body.items as { id: number }[]
 
   it('loads the road-test page with less than 120 KiB of compressed JavaScript', async () => {
@@ -59,7 +84,14 @@ describe('the road test at the roadside, with little or no signal', async () => 
     const before = (await roadTests()).length
     const tab = await context.newPage()
     await tab.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
-    await fillTheWizard(tab)
+    await fillTheWizard(tab, 'hill-rollback.jpg')
+    await expect.poll(() => keptPage(tab)).toBe(true)
+    // A reload keeps the photo with the rest, still marked as not sent.
+    await tab.reload({ waitUntil: 'networkidle' })
+    await tab.getByRole('button', { name: 'Hill start' }).click()
+    await expect.poll(() => tab.locator('[data-photos-unsent]').textContent()).toContain('hill-rollback.jpg')
+    expect(await tab.locator('[data-photos-unsent]').textContent()).toContain('not sent yet, kept on this phone')
+    await tab.getByRole('button', { name: 'Verdict' }).click()
     // No signal: the phone knows it is offline, and nothing it sends reaches the server. (Playwright's offline
     // emulation alone let a send through in two runs on a loaded machine, so the network is cut as well.)
     await context.route(`${baseUrl}/api/**`, route => route.abort('internetdisconnected'))
@@ -67,16 +99,78 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await tab.waitForFunction(() => !navigator.onLine)
     await tab.getByRole('button', { name: 'Save the road test' }).click()
     await expect.poll(() => tab.locator('[data-unsent]').textContent()).toContain('No connection: the road test is kept on this phone')
+    expect(await tab.locator('[data-unsent]').textContent()).toContain('Its 1 photo will follow it')
     await shot(tab, 'roadside-01-not-sent')
-    await tab.reload().catch(() => {}) // with no signal the page itself cannot load again
+    // With no signal a reload still opens the wizard, from the page and code the phone kept, with the record.
+    const reloaded = await tab.reload({ waitUntil: 'load' })
+    expect(reloaded?.headers()['x-voltwright-kept']).toBe('no signal')
+    await expect.poll(() => tab.locator('[data-unsent]').textContent()).toContain('No connection: the road test is kept on this phone')
+    await shot(tab, 'roadside-01b-reloaded-without-signal')
     await tab.close() // the tester gives up and closes the tab; the record waits on the phone
     expect((await roadTests()).length).toBe(before)
     await context.unroute(`${baseUrl}/api/**`)
     await context.setOffline(false)
     await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
     await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))
-    expect((await roadTests()).length).toBe(before + 1)
-    expect(await page.evaluate(id => localStorage.getItem(`voltwright:road-test:${id}`), versionId)).toBeNull()
+    const after = await roadTests()
+    expect(after.length).toBe(before + 1)
+    const recorded = (await tester.call('GET', `/api/road-tests/${newest(after)}`)).body as { photos: { filename: string, caption: string }[] }
+    expect(recorded.photos.map(p => [p.filename, p.caption])).toEqual([['hill-rollback.jpg', 'Hill start']])
+    expect(await keptDrafts(page, versionId)).toEqual([])
+    expect(await keptPhotos(page, versionId)).toBe(0)
+  })
+
+  it('sends a kept photo once after the record, when the answer to its send is lost and the page reloaded', async () => {
+    const versionId = await approvedVersion(profileId)
+    await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+    await fillTheWizard(page, 'creep-hold.jpg')
+    // The photo reaches the server but its answer does not reach the phone.
+    let answerLost = () => {}
+    const lost = new Promise<void>((resolve) => { answerLost = resolve })
+    await page.route('**/api/road-tests/*/photos*', async (route) => {
+      await route.fetch()
+      await route.abort('internetdisconnected')
+      answerLost()
+    })
+    await page.getByRole('button', { name: 'Save the road test' }).click()
+    await lost
+    await expect.poll(() => page.locator('[data-photos-waiting]').textContent()).toContain('The road test is recorded; 1 photo not sent yet')
+    await expect.poll(() => page.getByRole('button', { name: 'Send the photos now' }).count()).toBe(1)
+    await shot(page, 'roadside-03-photo-not-sent')
+    const id = newest(await roadTests())
+    const photos = async () => ((await tester.call('GET', `/api/road-tests/${id}`)).body as { photos: unknown[] }).photos.length
+    await expect.poll(photos).toBe(1)
+    expect(await keptPhotos(page, versionId)).toBe(1)
+    await page.unroute('**/api/road-tests/*/photos*')
+    await page.reload({ waitUntil: 'networkidle' })
+    await page.waitForURL(u => u.pathname === `/road-tests/${id}`)
+    expect(await photos()).toBe(1)
+    expect(await keptPhotos(page, versionId)).toBe(0)
+    expect(await keptDrafts(page, versionId)).toEqual([])
+  })
+
+  it('keeps one person\'s road test from the next person signed in on the same phone', async () => {
+    const versionId = await approvedVersion(profileId)
+    const shared = await launch(390)
+    try {
+      const signInAs = (email: string) => shared.page.request.post(`${baseUrl}/api/auth/login`, { data: { email, password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      await signInAs('tester@voltwright.test')
+      await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+      await recordConditions(shared.page, { surface: 'Wet', ambientC: '9', route: 'Left on the shared phone' })
+      await expect.poll(() => keptDrafts(shared.page, versionId)).toHaveLength(1)
+      await expect.poll(() => keptPage(shared.page)).toBe(true)
+      await shared.page.getByRole('button', { name: 'Menu' }).click()
+      await shared.page.getByRole('button', { name: 'Sign out' }).click()
+      await shared.page.waitForURL(u => u.pathname === '/login')
+      expect(await shared.page.evaluate(() => caches.keys())).toEqual([])
+      await signInAs('lead@voltwright.test')
+      await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
+      await expect.poll(() => shared.page.getByLabel('Route').count()).toBe(1)
+      expect(await shared.page.getByLabel('Route').inputValue()).toBe('')
+      expect(await shared.page.getByText('Carried on from what this phone kept.').count()).toBe(0)
+    } finally {
+      await shared.context.close()
+    }
   })
 
   it('records a road test once when the answer to a send is lost and the send is repeated', async () => {

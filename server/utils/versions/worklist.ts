@@ -33,9 +33,11 @@ export async function reviewWorklist(user: SignedIn): Promise<{ items: ReviewWor
   return { items, total: items.length }
 }
 
-// What waits for a tuner: their drafts, and their sent-back versions not yet followed by a new one.
+// What waits for a tuner: their drafts, and their sent-back versions that no later version of the profile has
+// overtaken (from whichever version it was started; a withdrawn one aside), as the car's overview reads it.
 export async function draftWorklist(user: SignedIn): Promise<{ items: DraftWorkItem[], total: number }> {
-  const noFollowUp = literal('NOT EXISTS (SELECT 1 FROM profile_versions c WHERE c."parentVersionId" = "ProfileVersion"."id")')
+  const noFollowUp = literal(`NOT EXISTS (SELECT 1 FROM profile_versions c WHERE c."profileId" = "ProfileVersion"."profileId"
+    AND c."versionNo" > "ProfileVersion"."versionNo" AND c.state <> 'withdrawn')`)
   const rows = await ProfileVersion.findAll({
     where: { workshopId: user.workshopId, authorId: user.id, [Op.or]: [{ state: 'draft' }, { state: 'rejected', [Op.and]: [noFollowUp] }] },
     include: [carInclude, reviewsInclude],
