@@ -176,6 +176,7 @@ export function eventStory(e: HistoryEntry): EventStory {
     const key = path.split('/').pop() ?? ''
     if ((key === 'assigneeId' || key === 'ownerUserId') && v !== null && v !== undefined) return people[String(v)] ?? 'someone no longer listed'
     if (key === 'platformKey' && typeof v === 'string') return findPlatform(v)?.name ?? v
+    if (key === 'platformKeys' && Array.isArray(v)) return v.length ? v.map(k => findPlatform(String(k))?.name ?? String(k)).join(', ') : 'none'
     // The unit goes with the value unless the field's label already names it ("Power cap, kW").
     const label = knownChangeLabel(e.entityType, path)
     return valueText(v, label && /, \S+$/.test(label) && unitOf(key) ? '' : key)
@@ -184,13 +185,16 @@ export function eventStory(e: HistoryEntry): EventStory {
     sentence: `${sentenceOf(e, d)}.`,
     facts: [...factsOf(e, d), ...(e.action === 'platform.created' ? platformSettings(e) : [])],
     checks: checksOf(d),
-    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema'))).map(c => ({
+    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path)).map(c => ({
       label: changePathLabel(c.path, e.entityType),
       before: c.beforeKnown ? changeValue(c.before, c.path) : null,
       after: c.op === 'remove' ? 'removed' : changeValue(c.after, c.path),
       removed: c.op === 'remove'
     })),
     created,
-    auditors: auditorRows(e)
+    auditors: [...auditorRows(e), ...e.changes.filter(c => codePath(e, c.path) && c.op !== 'remove').map(c => ({ label: 'Short code', value: String(c.after) }))]
   }
 }
+
+// A drive unit's or a check's short code is how the software knows it, not how people name it: for auditors only.
+const codePath = (e: HistoryEntry, path: string) => path === '/key' && (e.entityType === 'platform' || e.entityType === 'workshop-check')

@@ -26,7 +26,7 @@ const settingLabels: Record<string, string> = {
 }
 
 const snagLabels: Record<string, string> = {
-  '/kind': 'Kind', '/title': 'Snag', '/detail': 'Detail', '/status': 'Status', '/blocking': 'Blocks sign-off', '/priority': 'Priority', '/assigneeId': 'Assigned to (person no.)'
+  '/kind': 'Kind', '/title': 'Snag', '/detail': 'Detail', '/status': 'Status', '/blocking': 'Blocks sign-off', '/priority': 'Priority', '/assigneeId': 'Assigned to'
 }
 
 const userLabels: Record<string, string> = { '/name': 'Name', '/email': 'E-mail', '/roles': 'Roles', '/active': 'Can sign in' }

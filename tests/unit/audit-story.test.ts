@@ -82,9 +82,17 @@ describe('the history in the workshop\'s words', () => {
     const snag = eventStory(entryOf('snag.updated', samples['snag.updated']!))
     expect(snag.changes).toEqual([
       { label: 'Status', before: 'Open', after: 'In hand', removed: false },
-      { label: 'Assigned to (person no.)', before: null, after: 'Ada Penhallow', removed: false }
+      { label: 'Assigned to', before: null, after: 'Ada Penhallow', removed: false }
     ])
     const diff = eventStory(entryOf('readback.differs', samples['readback.differs']!))
     expect(diff.facts.find(f => f.label === 'Differences')!.value).toBe('Power cap: 85 kW signed off, 92.3 kW found; Unknown setting: none signed off, 4 found')
+  })
+
+  it('keeps a check\'s short code for the auditors, and names drive units rather than their codes', () => {
+    const made = eventStory(entryOf('workshop-check.created', { entityType: 'workshop-check', data: { after: { key: 'tow-hitch', label: 'Tow hitch', record: 'pass-fail', required: true, retired: false, platformKeys: ['quennel-95', 'fenlow-45'] } } }))
+    expect(made.changes.map(c => c.label)).not.toContain('Short name')
+    expect(visible(made)).not.toContain('tow-hitch')
+    expect(made.auditors).toContainEqual({ label: 'Short code', value: 'tow-hitch' })
+    expect(made.changes.find(c => c.label.startsWith('Only for drive units'))!.after).toBe('Quennel 95, Fenlow 45')
   })
 })
