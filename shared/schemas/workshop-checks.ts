@@ -22,7 +22,8 @@ export type RecordedCheck = Omit<WorkshopCheck, 'retired' | 'platformKeys'>
 const label = z.string({ error: 'Say what is checked' }).trim().min(1, 'Say what is checked').max(80, 'At most 80 characters')
 const unit = z.string().trim().min(1).max(20, 'At most 20 characters')
 const bound = z.number().finite().min(-1e6).max(1e6)
-const platformKeys = z.array(z.string().min(1).max(60)).min(1, 'Choose at least one drive unit, or leave it for all').max(50)
+// A unit named twice is kept once.
+const platformKeys = z.array(z.string().min(1).max(60)).min(1, 'Choose at least one drive unit, or leave it for all').max(50).transform(keys => [...new Set(keys)])
 
 const rangeInOrder = (c: { min?: number | null, max?: number | null }) => c.min === undefined || c.max === undefined || c.min === null || c.max === null || c.min < c.max
 

@@ -40,7 +40,7 @@ export async function createCheck(admin: SignedIn, input: WorkshopCheckCreate): 
     for (let i = 2; taken.has(key) || (mandatoryCheckKeys as readonly string[]).includes(key); i++) key = `${base}-${i}`
     const c = await WorkshopCheck.create({
       workshopId: admin.workshopId, key, label: input.label, record: input.record, unit: input.unit ?? null, min: input.min ?? null, max: input.max ?? null,
-      required: input.required, platformKeys: input.platformKeys ? [...new Set(input.platformKeys)] : null
+      required: input.required, platformKeys: input.platformKeys ?? null
     }, { transaction })
     const after = checkView(c)
     await appendAuditEvent(transaction, { workshopId: admin.workshopId, actorId: admin.id, action: 'workshop-check.created', entityType: 'workshop-check', entityId: c.id, data: { after } })
@@ -53,8 +53,7 @@ export async function changeCheck(admin: SignedIn, key: string, input: WorkshopC
     const c = await WorkshopCheck.findOne({ where: { workshopId: admin.workshopId, key }, transaction, lock: transaction.LOCK.UPDATE })
     if (!c) throw createError({ statusCode: 404, message: 'No such check in this workshop.' })
     const before = checkView(c)
-    const { retired, ...asked } = input
-    const fields = asked.platformKeys ? { ...asked, platformKeys: [...new Set(asked.platformKeys)] } : asked
+    const { retired, ...fields } = input
     const next = { ...before, ...fields, ...(retired === undefined ? {} : { retired }) }
     refuseChange(before, next, retired)
     if (same(before, next)) return before
@@ -79,7 +78,7 @@ const same = (a: CheckView, b: CheckView) => JSON.stringify(a) === JSON.stringif
 
 // Every drive unit named must be one this workshop can fit (its own or a shared one).
 async function requireKnownUnits(workshopId: number, keys: string[] | null, transaction: Transaction) {
-  for (const key of new Set(keys ?? [])) {
+  for (const key of keys ?? []) {
     if (!await findWorkshopPlatform(key, workshopId, transaction)) {
       throw createError({ statusCode: 400, message: `There is no drive unit "${key}" in this workshop.`, data: { fields: [{ path: 'platformKeys', message: 'Choose drive units from the list' }] } })
     }
