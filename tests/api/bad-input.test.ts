@@ -256,11 +256,13 @@ function uploads() {
     expect((await upload(tester, photos, multipart('GIF89a not really', 'sill.gif', 'image/gif'))).status).toBe(415)
   })
 
-  it('keeps only the last part of a file name that has path parts', async () => {
+  it('keeps only the last part of a file name that has path parts, without control characters', async () => {
     for (const [path, name, bytes, type, expected] of [
       [telemetry, '../../etc/passwd.csv', csv, 'text/csv', 'passwd.csv'],
       [photos, '..\\..\\windows\\sill.png', png, 'image/png', 'sill.png'],
-      [photos, '/var/lib/../../sill-2.png', png, 'image/png', 'sill-2.png']
+      [photos, '/var/lib/../../sill-2.png', png, 'image/png', 'sill-2.png'],
+      // U+0000 cannot be stored; control characters mean nothing in a name.
+      [photos, 'sill\u0000-3\u0007.png', png, 'image/png', 'sill-3.png']
     ] as const) {
       const res = await upload(tester, path, multipart(bytes, name, type))
       expect(res.status, JSON.stringify(res.body)).toBe(201)

@@ -50,7 +50,7 @@ export function receiveUpload<T>(event: H3Event, opts: { field: string, maxBytes
       if (name !== opts.field || started) return stream.resume()
       started = true
       stream.on('limit', () => stream.destroy(tooLarge(opts.maxBytes)))
-      handle({ stream, filename: info.filename ?? '', mimeType: (info.mimeType ?? '').toLowerCase() }).then(
+      handle({ stream, filename: printable(info.filename ?? ''), mimeType: (info.mimeType ?? '').toLowerCase() }).then(
         value => finish(() => resolve(value)),
         (e) => {
           stream.destroy()
@@ -77,6 +77,11 @@ export function tooLarge(maxBytes: number) {
 export function uploadError(e: unknown): never {
   if (e instanceof UploadRefused) throw createError({ statusCode: e.statusCode, message: e.message, data: e.data })
   throw e
+}
+
+// A file name without control characters: U+0000 cannot be stored, and the rest mean nothing in a name.
+function printable(name: string): string {
+  return [...name].filter((ch) => { const c = ch.codePointAt(0)!; return c >= 0x20 && c !== 0x7f }).join('')
 }
 
 // An ASCII stand-in for old clients and the exact UTF-8 name for the rest (RFC 6266 section 4.3, RFC 8187).
