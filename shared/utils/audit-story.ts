@@ -9,7 +9,7 @@ import { summaryRows } from '../telemetry/summary-rows'
 import { findPlatform } from '../platforms'
 import { changePathLabel } from './audit-actions'
 import { bytesText, keyLabel, numberText, stageWords, unitOf, valueText, wordsOf } from './audit-values'
-import { knownChangeLabel } from './change-labels'
+import { knownChangeLabel, knownChangeRank } from './change-labels'
 import { auditorRows, isAuditorKey } from './audit-auditors'
 import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
 
@@ -41,7 +41,8 @@ function sentenceOf(e: HistoryEntry, d: Data): string {
     case 'vehicle.created': {
       const car = [after.year ?? d.year, after.make ?? d.make, after.model ?? d.model].filter(Boolean).join(' ')
       const ref = str(after.stockRef) ?? str(d.stockRef) ?? e.vehicle?.stockRef
-      return `${who} booked in ${car || 'the car'}${ref ? ` as ${ref}` : ''}`
+      const kit = str(d.kitName) ? ` from the kit ${d.kitName}${num(d.baselineVersionNo) ? `, on its baseline v${d.baselineVersionNo}` : ''}` : ''
+      return `${who} booked in ${car || 'the car'}${ref ? ` as ${ref}` : ''}${kit}`
     }
     case 'vehicle.updated': return `${who} changed the car's facts`
     case 'vehicle.drift-cleared': return `${who} cleared the car's drift warning${e.names.version ? ` with ${e.names.version} signed off` : ''}`
@@ -96,7 +97,21 @@ function sentenceOf(e: HistoryEntry, d: Data): string {
 
 // Keys a sentence or a section already tells, or that belong only to the auditors' part.
 const told = new Set(['versionNo', 'profileName', 'profile', 'parentVersionNo', 'vehicleStatus', 'unresolvedSnags', 'dangerCount', 'from', 'to', 'because',
-  'passwordChanged', 'name', 'after', 'result', 'recheckId', 'verdict', 'checks', 'parameters', 'patchFromParent', 'filename', 'matches', 'stockRef', 'make', 'model', 'year', 'signed'])
+  'passwordChanged', 'name', 'after', 'result', 'recheckId', 'verdict', 'checks', 'parameters', 'patchFromParent', 'filename', 'matches', 'stockRef', 'make', 'model', 'year', 'signed',
+  'kitName', 'baselineVersionNo'])
+
+// "Regen against grip, snow (2 × danger); Stop lamps and regen (UN R13-H) (caution)": one rule's warnings once.
+function warningsText(list: Data[]): string {
+  const byRule = new Map<string, string[]>()
+  for (const w of list) byRule.set(String(w.rule), [...(byRule.get(String(w.rule)) ?? []), String(w.severity)])
+  return [...byRule].map(([rule, severities]) => {
+    const counts = [...new Set(severities)].map((s) => {
+      const n = severities.filter(x => x === s).length
+      return n > 1 ? `${n} × ${s}` : s
+    })
+    return `${ruleTitles[rule as keyof typeof ruleTitles]?.title ?? wordsOf(rule)} (${counts.join(', ')})`
+  }).join('; ')
+}
 
 // "Lift-off regen: 25 % signed off, 50 % found"
 function differenceText(x: Data): string {
@@ -115,7 +130,7 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
       const c = obj(v)
       add('Conditions', [valueText(c.surface, 'surface'), valueText(c.ambientC, 'ambientC'), str(c.route)].filter(Boolean).join(', '))
     } else if ((k === 'warnings' || k === 'newWarnings') && Array.isArray(v)) {
-      add(k === 'warnings' ? 'Warnings' : 'New warnings', v.map((w: Data) => `${ruleTitles[w.rule as keyof typeof ruleTitles]?.title ?? wordsOf(String(w.rule))} (${w.severity})`).join('; ') || 'none')
+      add(k === 'warnings' ? 'Warnings' : 'New warnings', warningsText(v.map(obj)) || 'none')
     } else if (k === 'justifications') {
       for (const [rule, text] of Object.entries(obj(v))) add(`Why it is safe: ${ruleTitles[rule as keyof typeof ruleTitles]?.title ?? wordsOf(rule)}`, valueText(text))
     } else if (k === 'differences' && Array.isArray(v)) {
@@ -147,12 +162,19 @@ function measuredText(key: CheckKey, name: string, v: unknown): string {
   return `${field.label.replace(/, if measured$/, '')} ${text} ${field.unit}`
 }
 
+// A check's measured values in the order its guide asks for them (the database keeps keys in its own order).
+function fieldRank(key: CheckKey, name: string): number {
+  const i = checkGuides.find(g => g.key === key)?.fields.findIndex(f => f.name === name) ?? -1
+  return i < 0 ? Number.MAX_SAFE_INTEGER : i
+}
+
 function checksOf(d: Data): StoryCheck[] {
   if (!Array.isArray(d.checks)) return []
   return d.checks.map((c: Data) => ({
     title: checkTitles[c.key as CheckKey] ?? wordsOf(String(c.key)),
     verdict: valueText(c.verdict, 'verdict'),
     measured: Object.entries(obj(c.values)).filter(([, v]) => v !== null && v !== undefined)
+      .sort(([a], [b]) => fieldRank(c.key as CheckKey, a) - fieldRank(c.key as CheckKey, b))
       .map(([k, v]) => measuredText(c.key as CheckKey, k, v)).join(', ')
   }))
 }
@@ -185,7 +207,8 @@ export function eventStory(e: HistoryEntry): EventStory {
     sentence: `${sentenceOf(e, d)}.`,
     facts: [...factsOf(e, d), ...(e.action === 'platform.created' ? platformSettings(e) : [])],
     checks: checksOf(d),
-    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path)).map(c => ({
+    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path))
+      .sort((a, b) => knownChangeRank(e.entityType, a.path) - knownChangeRank(e.entityType, b.path)).map(c => ({
       label: changePathLabel(c.path, e.entityType),
       before: c.beforeKnown ? changeValue(c.before, c.path) : null,
       after: c.op === 'remove' ? 'removed' : changeValue(c.after, c.path),

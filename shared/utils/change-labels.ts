@@ -37,7 +37,10 @@ const checkLabels: Record<string, string> = {
   '/max': 'Highest allowed', '/required': 'Required on every road test', '/retired': 'Retired', '/platformKeys': 'Only for drive units (none: every one)'
 }
 
-const byEntity: Record<string, Record<string, string>> = { 'vehicle': carLabels, 'version': versionLabels, 'workshop': settingLabels, 'snag': snagLabels, 'user': userLabels, 'platform': platformLabels, 'workshop-check': checkLabels }
+// A read-back that differs marks the car as drifted.
+const readbackLabels: Record<string, string> = { '/driftedAt': 'Car marked as drifted' }
+
+const byEntity: Record<string, Record<string, string>> = { 'readback': readbackLabels, 'vehicle': carLabels, 'version': versionLabels, 'workshop': settingLabels, 'snag': snagLabels, 'user': userLabels, 'platform': platformLabels, 'workshop-check': checkLabels }
 
 // A curve's point of a version's setting: "/parameters/throttleMap/2/y" is "Throttle map, point 3, torque".
 const curveProps = Object.fromEntries(platforms.flatMap(p => Object.entries(schemaProperties(p.schema))).filter(([, p]) => p.type === 'array'))
@@ -48,6 +51,19 @@ function pointLabel(path: string): string | undefined {
   if (!m || !prop) return undefined
   const axis = m[3] ? curveAxes(prop)[m[3] as 'x' | 'y'] : undefined
   return `${String(prop.title ?? m[1])}, point ${Number(m[2]) + 1}${axis ? `, ${String(axis.title ?? m[3]).toLowerCase()}` : ''}`
+}
+
+// Where a field stands among its record's fields (a drive unit's settings in the order it lists them), so a
+// change reads in the form's order rather than the order the database keeps its keys in.
+const ranks = Object.fromEntries(Object.entries(byEntity).map(([entity, labels]) => [entity, new Map(Object.keys(labels).map((path, i) => [path, i]))]))
+
+export function knownChangeRank(entityType: string | undefined, path: string): number {
+  const rank = entityType ? ranks[entityType] : undefined
+  for (let p = path; rank && p; p = p.slice(0, Math.max(0, p.lastIndexOf('/')))) {
+    const i = rank.get(p)
+    if (i !== undefined) return i
+  }
+  return Number.MAX_SAFE_INTEGER
 }
 
 export function knownChangeLabel(entityType: string | undefined, path: string): string | undefined {

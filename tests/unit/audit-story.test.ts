@@ -4,6 +4,8 @@ import { describe, it, expect } from 'vitest'
 import { eventStory, type EventStory } from '../../shared/utils/audit-story'
 import { auditActionLabels } from '../../shared/utils/audit-actions'
 import { entryOf, legacySamples, samples } from './audit-story-fixtures'
+import { creationRows } from '../../shared/utils/audit-changes'
+import { internalNameIn } from './internal-names'
 
 // Every action the product writes, read from its writers: each `action:` of an audit event in server/ and seeders/.
 function writtenActions(): Set<string> {
@@ -47,6 +49,7 @@ describe('the history in the workshop\'s words', () => {
     const text = visible(story)
     expect(story.sentence).toMatch(/^[A-Z].*\.$/s)
     expect(text.match(CAMEL)?.[0], 'a field name').toBeUndefined()
+    expect(internalNameIn(text), 'a code or field name').toBeUndefined()
     expect(text.match(/.{0,20}[{[].{0,20}/)?.[0], 'JSON').toBeUndefined()
     expect(text.match(TOO_PRECISE)?.[0], 'a long decimal').toBeUndefined()
     expect(text).not.toContain(entry.hash)
@@ -55,6 +58,15 @@ describe('the history in the workshop\'s words', () => {
     expect(auditors).toContain(entry.hash)
     expect(auditors).toContain(entry.prevHash)
     expect(auditors).toContain(`Event ${entry.id}`)
+  })
+
+  it('knows a code when it sees one, and a sentence when it does not', () => {
+    expect(internalNameIn('Lift-off regen: fail, lift-off-regen')).toContain('lift-off-regen')
+    expect(internalNameIn('The car is road-testing.')).toContain('road-testing')
+    expect(internalNameIn('Event version.signed-off')).toContain('version.signed-off')
+    expect(internalNameIn('Peak motor undefined °C')).toContain('undefined')
+    expect(internalNameIn('powerCapKw 45')).toContain('powerCapKw')
+    expect(internalNameIn('Full-power pull: pass; the full-power pull check; lift-off regen 25 %; the signed-off settings; 24 kWh')).toBeUndefined()
   })
 
   it('tells a sign-off with its people, version, stage and open snags', () => {
@@ -86,6 +98,30 @@ describe('the history in the workshop\'s words', () => {
     ])
     const diff = eventStory(entryOf('readback.differs', samples['readback.differs']!))
     expect(diff.facts.find(f => f.label === 'Differences')!.value).toBe('Power cap: 85 kW signed off, 92.3 kW found; Unknown setting: none signed off, 4 found')
+  })
+
+  it('names a car booked in from a kit by the kit and its baseline, with the record numbers for auditors', () => {
+    const booked = eventStory(entryOf('vehicle.created', { entityType: 'vehicle', data: { stockRef: 'OF-107', make: 'Penhallow', model: 'Kestrel Roadster', status: 'road-testing', kitId: 1, kitName: 'Forge RD-45 small rear-drive', baselineVersionId: 9, baselineVersionNo: 1 } }))
+    expect(booked.sentence).toBe('Sol Brannagh booked in Penhallow Kestrel Roadster as OF-107 from the kit Forge RD-45 small rear-drive, on its baseline v1.')
+    expect(booked.facts.map(f => f.label)).toEqual(['Status'])
+    expect(booked.auditors).toContainEqual({ label: 'Kit record', value: '1' })
+    expect(booked.auditors).toContainEqual({ label: 'Kit baseline version record', value: '9' })
+  })
+
+  it('lists one rule\'s two warnings once, with how many of each severity', () => {
+    const sent = eventStory(entryOf('version.submitted', { entityType: 'version', data: { versionNo: 1, dangerCount: 2, warnings: [{ rule: 'regen-grip-snow', severity: 'danger' }, { rule: 'regen-grip-snow', severity: 'danger' }, { rule: 'regen-grip-snow', severity: 'caution' }, { rule: 'stop-lamp', severity: 'caution' }] }, names: { version: 'Road v1' } }))
+    expect(sent.facts.find(f => f.label === 'Warnings')!.value).toBe('Regen against grip, snow (2 × danger, caution); Stop lamps and regen (UN R13-H) (caution)')
+  })
+
+  it('lists a drafted version\'s settings and a check\'s measurements in the drive unit\'s and the check\'s own order', () => {
+    // PostgreSQL keeps a JSONB object's keys shortest first: the history must not read in that order.
+    const parameters = { powerCapKw: 45, torqueCapNm: 160, motorCutoffC: 145, brakeRegenPct: 40, liftOffRegenPct: 60, motorDerateStartC: 120 }
+    const drafted = eventStory(entryOf('version.created', { entityType: 'version', data: { versionNo: 1, parameters, origin: 'workshop' }, names: { version: 'Road v1' }, changes: creationRows({ parameters }) }))
+    const labels = drafted.changes.map(c => c.label)
+    expect(labels.indexOf('Motor derate start, °C')).toBeLessThan(labels.indexOf('Motor cut-off, °C'))
+    expect(labels.indexOf('Lift-off regen, %')).toBeLessThan(labels.indexOf('Brake regen, %'))
+    const soak = eventStory(entryOf('road-test.recorded', { entityType: 'road-test', data: { versionNo: 1, verdict: 'pass', checks: [{ key: 'thermal-soak', verdict: 'pass', values: { motorC: 74, batteryC: 31, inverterC: 58 } }] } }))
+    expect(soak.checks[0]!.measured).toBe('Peak motor 74 °C, Peak inverter 58 °C, Peak battery 31 °C')
   })
 
   it('keeps a check\'s short code for the auditors, and names drive units rather than their codes', () => {

@@ -1,0 +1,30 @@
+// What a person must never read on a screen or in the history: the product's own codes and field names.
+// Shared by the history-in-words unit test and the browser test that reads every main page.
+import { mandatoryCheckKeys, checkVerdicts } from '../../shared/schemas/road-test'
+import { ruleTitles } from '../../shared/compute/rule-titles'
+import { versionStates } from '../../shared/schemas/version'
+import { vehicleStatuses } from '../../shared/schemas/vehicle'
+import { snagStatuses } from '../../shared/schemas/snag'
+import { auditActionLabels } from '../../shared/utils/audit-actions'
+
+// Codes of more than one word ("lift-off-regen", "road-testing", "version.signed-off"): a plain word such as
+// "draft" or "pass" is also English, a joined code is not.
+export const codeWords = [...new Set<string>([
+  ...mandatoryCheckKeys, ...checkVerdicts, ...Object.keys(ruleTitles), ...versionStates, ...vehicleStatuses, ...snagStatuses,
+  ...Object.keys(auditActionLabels)
+].filter(c => /[-.]/.test(c) && c !== 'signed-off'))] // "the signed-off settings" is also how the workshop speaks
+
+// "hill-start" on its own, not the "hill-start" inside "uphill-starts" nor a sentence's "lift-off regen".
+// "full-power pull" is the check's own name in words.
+const codePattern = new RegExp(`(?<![\\w.-])(${codeWords.map(c => c.replace(/[.-]/g, m => `\\${m}`)).join('|')})(?![\\w-]| pull)`)
+const CAMEL = /\b(?!kWh?\b)[a-z]+[A-Z][A-Za-z]*\b/ // a field name; kW and kWh are units
+const LEFT_OVER = /\b(undefined|NaN|null)\b|\[object Object\]/
+
+// The first internal name in the text, with a little of what surrounds it, or undefined.
+export function internalNameIn(text: string): string | undefined {
+  for (const re of [codePattern, CAMEL, LEFT_OVER]) {
+    const m = re.exec(text)
+    if (m) return text.slice(Math.max(0, m.index - 30), m.index + m[0].length + 30)
+  }
+  return undefined
+}
