@@ -26,7 +26,8 @@ export function speedText(kph: number | null | undefined, units: UnitPreference 
 // Deceleration in m/s² and in g (standard gravity, 3rd CGPM 1901), as drivers and engineers both read it.
 export function decelText(ms2: number | null | undefined): string {
   if (ms2 === null || ms2 === undefined || !Number.isFinite(ms2)) return '—'
-  return `${formatFigure(ms2, 2)} m/s² (${formatFigure(ms2 / STANDARD_GRAVITY, 2)} g)`
+  // No-break spaces: a narrow column breaks between the two figures, never inside one.
+  return `${formatFigure(ms2, 2)}\u00a0m/s² (${formatFigure(ms2 / STANDARD_GRAVITY, 2)}\u00a0g)`
 }
 
 // The other unit beside a parameter's own, when the workshop wants it: hp beside kW, mph beside km/h.
@@ -37,8 +38,4 @@ export function secondUnit(value: unknown, unit: string | undefined, units: Unit
   return null
 }
 
-export function hoursText(h: number | null | undefined): string {
-  if (h === null || h === undefined || !Number.isFinite(h)) return '—'
-  const minutes = Math.round(h * 60)
-  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`
-}
+export { hoursText } from '~~/shared/utils/dates'

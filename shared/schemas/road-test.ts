@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { justificationsSchema, parametersSchema } from './profile'
+import { checkTitles } from './road-test-checks'
 
 // A road test (docs/architecture.md#road-test): conditions, one verdict per mandatory check with its measured values.
 export const surfaces = ['dry', 'wet', 'snow'] as const
@@ -80,8 +81,10 @@ export const roadTestCreateSchema = z.object({
 }).strict().superRefine((rt, ctx) => {
   for (const key of mandatoryCheckKeys) {
     const found = rt.checks.filter(c => c.key === key)
-    if (found.length === 0) ctx.addIssue({ code: 'custom', path: ['checks'], message: `The ${key} check is missing` })
-    if (found.length > 1) ctx.addIssue({ code: 'custom', path: ['checks'], message: `The ${key} check is there twice` })
+    // Said by the check's name as the tester knows it ("hill start"), never its key.
+    const name = checkTitles[key].toLowerCase()
+    if (found.length === 0) ctx.addIssue({ code: 'custom', path: ['checks'], message: `The ${name} check is missing` })
+    if (found.length > 1) ctx.addIssue({ code: 'custom', path: ['checks'], message: `The ${name} check is there twice` })
   }
   const keys = rt.checks.map(c => c.key)
   keys.forEach((k, i) => {

@@ -23,5 +23,12 @@ export function formatDateTime(x: DateInput | null | undefined, o: DateOptions =
   return d ? `${formatDate(d, o)}, ${d.toLocaleTimeString(o.locale ?? DEFAULT_LOCALE, { hour: '2-digit', minute: '2-digit', timeZone: o.timeZone })}` : '—'
 }
 
+// A duration in hours as the workshop says it: "2 h 31 min" (the tune sheet, the handover sheet).
+export function hoursText(h: number | null | undefined): string {
+  if (h === null || h === undefined || !Number.isFinite(h)) return '—'
+  const minutes = Math.round(h * 60)
+  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`
+}
+
 // An ISO moment or day as the history may hold one in its values.
 export const isIsoMoment = (s: string) => /^\d{4}-\d{2}-\d{2}(T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:?\d{2})?)?$/.test(s)

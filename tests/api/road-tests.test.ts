@@ -79,7 +79,7 @@ describe('road tests', async () => {
   it('names each missing or wrong part of the record', async () => {
     const noHill = await tester.call('POST', `/api/versions/${versionId}/road-tests`, roadTestBody({ checks: passingChecks().slice(1) }))
     expect(noHill.status).toBe(400)
-    expect(noHill.body.data.fields).toContainEqual({ path: 'checks', message: 'The hill-start check is missing' })
+    expect(noHill.body.data.fields).toContainEqual({ path: 'checks', message: 'The hill start check is missing' })
     const checks = passingChecks()
     checks[0] = { key: 'hill-start', verdict: 'pass', values: { gradientPct: 18 } as never, note: '' }
     checks[5] = { key: 'thermal-soak', verdict: 'fail', values: { motorC: 130, inverterC: 70, batteryC: 40 }, note: 'Motor hot' }

@@ -3,14 +3,17 @@ import type { Page } from 'playwright-core'
 import { launch, baseUrl, shot } from './helpers'
 import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
 import { newCar } from '../api/road-test-fixtures'
+import { internalNameIn } from '../unit/internal-names'
 
-// What each of the workshop's people opens in a day; the car and version are made here, with a long unbroken rationale.
+// What each of the workshop's people opens in a day; the car and version are made here, with a long unbroken rationale,
+// beside a demo car with every part filled in (OF-103: two profiles signed off, road tests, snags, a read-back).
 const tabs = ['versions', 'road-tests', 'snags', 'readbacks', 'history']
-function pagesFor(carId: number, versionId: number, ownCarId: number): Record<string, string[]> {
+interface Ids { carId: number, versionId: number, ownCarId: number, demoId: number, kitId: number, roadTestId: number }
+function pagesFor({ carId, versionId, ownCarId, demoId, kitId, roadTestId }: Ids): Record<string, string[]> {
   return {
-    'tuner@voltwright.test': ['/', '/cars', `/cars/${carId}`, `/versions/${versionId}`, '/snags'],
-    'engineer@voltwright.test': ['/', '/activity', `/cars/${carId}`, `/versions/${versionId}`],
-    'tester@voltwright.test': ['/', '/cars', `/cars/${carId}`, ...tabs.map(t => `/cars/${carId}/${t}`), '/snags'],
+    'tuner@voltwright.test': ['/', '/cars', `/cars/${carId}`, `/versions/${versionId}`, '/snags', `/cars/${demoId}/versions`, `/cars/${demoId}/handover`, '/kits', `/kits/${kitId}`],
+    'engineer@voltwright.test': ['/', '/activity', `/cars/${carId}`, `/versions/${versionId}`, `/cars/${demoId}`, `/cars/${demoId}/history`],
+    'tester@voltwright.test': ['/', '/cars', `/cars/${carId}`, ...tabs.map(t => `/cars/${carId}/${t}`), ...tabs.map(t => `/cars/${demoId}/${t}`), '/snags', `/road-tests/${roadTestId}`],
     'auditor@voltwright.test': ['/', '/activity', `/cars/${carId}`, `/cars/${carId}/history`],
     'admin@voltwright.test': ['/', '/admin/people', '/admin/workshop', '/admin/platforms', '/activity'],
     'client@voltwright.test': ['/', `/my-cars/${ownCarId}`]
@@ -18,6 +21,11 @@ function pagesFor(carId: number, versionId: number, ownCarId: number): Record<st
 }
 
 const sideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)
+// A table meant to stack on a phone that still needs its own sideways scroll (columns out of sight).
+const overflowingTables = (page: Page) => page.locator('table.stack').evaluateAll(tables => tables
+  .filter(t => t.scrollWidth > (t.parentElement?.clientWidth ?? 0) + 1).map(t => t.querySelector('caption')?.textContent ?? t.outerHTML.slice(0, 60)))
+// The page as read: closed "for auditors" parts are not rendered, so innerText leaves them out.
+const pageText = (page: Page) => page.evaluate(() => document.querySelector('main')?.innerText ?? document.body.innerText)
 
 // The history as a person reads it: each event with the part for auditors folded away.
 const historyText = (page: Page) => page.locator('main ol > li').evaluateAll((items) => {
@@ -34,24 +42,32 @@ describe('every main page fits the screen, as each of its people sees it', async
   expect(created.status).toBe(201)
   const client = await signIn('client@voltwright.test')
   const ownCarId = (await client.call('GET', '/api/vehicles')).body.items[0].id as number
-  const pages = pagesFor(car.id, created.body.id, ownCarId)
+  const demoId = (await tuner.call('GET', '/api/vehicles?q=OF-103')).body.items[0].id as number
+  const kitId = (await tuner.call('GET', '/api/kits')).body.items[0].id as number
+  const roadTestId = (await tuner.call('GET', `/api/vehicles/${demoId}/road-tests`)).body.items[0].id as number
+  const pages = pagesFor({ carId: car.id, versionId: created.body.id, ownCarId, demoId, kitId, roadTestId })
 
   for (const width of [390, 1280]) {
     describe(`at ${width} px`, async () => {
       const { context, page } = await launch(width)
       afterAll(() => context.close())
 
-      it.each(Object.keys(pages))('%s: no page scrolls sideways', async (email) => {
+      it.each(Object.keys(pages))('%s: no page scrolls sideways, no list hides columns on a phone, no page shows an internal name', async (email) => {
         await context.clearCookies()
         const login = await page.request.post(`${baseUrl}/api/auth/login`, { data: { email, password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
         expect(login.ok()).toBe(true)
         const wide: string[] = []
+        const named: string[] = []
         for (const path of pages[email]!) {
           await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
           const extra = await sideways(page)
           if (extra > 0) wide.push(`${path}: ${extra} px too wide`)
+          if (width < 640) wide.push(...(await overflowingTables(page)).map(t => `${path}: the table "${t}" scrolls sideways`))
+          const name = internalNameIn(await pageText(page))
+          if (name) named.push(`${path}: …${name}…`)
         }
         expect(wide).toEqual([])
+        expect(named).toEqual([])
       })
     })
   }
@@ -69,6 +85,7 @@ describe('every main page fits the screen, as each of its people sees it', async
         expect(text.match(/.{0,20}[{[].{0,20}/)?.[0], `JSON on ${path}`).toBeUndefined()
         expect(text.match(/\d\.\d{5,}/)?.[0], `a long decimal on ${path}`).toBeUndefined()
         expect(text).not.toMatch(/[0-9a-f]{64}/)
+        expect(internalNameIn(text), `a code on ${path}`).toBeUndefined()
       }
       await shot(page, 'screens-01-history-print')
     } finally {

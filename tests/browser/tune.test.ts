@@ -57,9 +57,23 @@ describe('trying settings on a car', async () => {
     await expect.poll(() => page.locator('#param-powerCapKw-error').textContent()).toContain('at most 45 kW')
     expect(await page.locator('#param-powerCapKw').getAttribute('aria-invalid')).toBe('true')
     await shot(page, 'tune-04-out-of-range')
-    await page.getByRole('button', { name: /Back to the Fenlow 45 defaults/ }).click()
+    await page.getByRole('button', { name: 'The Fenlow 45 defaults' }).click()
     await expect.poll(() => rules(page)).toEqual([])
     expect(await page.locator('#param-powerCapKw-error').count()).toBe(0)
+  })
+
+  it('on a car with settings signed off, starts from them and offers the defaults beside them', async () => {
+    await page.goto(`${baseUrl}/cars`, { waitUntil: 'networkidle' })
+    await page.getByLabel(/Search make/).fill('OF-103')
+    await expect.poll(() => page.locator('tbody tr').count()).toBe(1)
+    await page.getByRole('link', { name: 'OF-103' }).click()
+    await page.getByRole('link', { name: 'Try settings' }).click()
+    await expect.poll(() => page.getByRole('status').filter({ hasText: 'Started from Road v1, on the car.' }).count()).toBe(1)
+    expect(await page.locator('#param-powerCapKw').inputValue()).toBe('30') // OF-103's signed-off Road v1
+    await page.getByRole('button', { name: 'Valet v1, on the car' }).click()
+    await expect.poll(() => page.locator('#param-powerCapKw').inputValue()).toBe('15')
+    await page.getByRole('button', { name: 'The Fenlow 45 defaults' }).click()
+    await expect.poll(() => page.locator('#param-powerCapKw').inputValue()).toBe('40')
   })
 
   it('works under the product\'s content security policy, which forbids eval', async () => {

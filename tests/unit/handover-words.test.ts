@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest'
-import { settingLines } from '../../server/utils/handover/words'
+import { figureLines, settingLines } from '../../server/utils/handover/words'
 import { handoverCautions } from '../../shared/schemas/handover'
 import { fenlow45 } from '../../shared/platforms/fenlow-45'
 import { quennel95 } from '../../shared/platforms/quennel-95'
@@ -27,6 +27,13 @@ describe('the handover sheet in the owner\'s words', () => {
     const roleTitles = Object.keys(ROLES).filter(r => byRole[r as keyof typeof byRole]).map(r => titleOf(byRole[r as keyof typeof byRole]!))
     expect(labels).toEqual([...roleTitles, 'Drive mode', 'Hill hold', 'Throttle map'])
     expect(labels.slice(0, 3)).toEqual(['Power cap', 'Torque cap', 'Regen torque limit'])
+  })
+
+  it('writes the figures as the tune sheet does: decelerations with two decimals, a charge in hours and minutes', () => {
+    const figures = { zeroTo50S: 5.2, zeroTo100S: null, topSpeedKph: 110, topSpeedLimitedBy: 'speed limit', maxStartGradePct: 32, startGradeLimitedBy: 'torque', liftOffDecelMs2: 0.5, powerRatioToOriginal: 1.2, chargeTime10to80H: 3.888 }
+    const lines = figureLines({ figures } as never, { originalEnginePowerKw: 25, chargerPowerKw: 3.6 } as never)
+    expect(lines).toContainEqual({ label: 'Lift-off slowing at 50 km/h', value: '0.50 m/s²' })
+    expect(lines).toContainEqual({ label: 'Charging from 10 % to 80 %', value: 'about 3 h 53 min on a 3.6 kW charger' })
   })
 
   it('speaks of the wheels regen brakes on this car', () => {

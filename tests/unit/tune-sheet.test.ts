@@ -23,7 +23,7 @@ describe('tune sheet numbers', () => {
 
   it('gives deceleration in m/s² and g, and times in hours and minutes, and a dash for what is missing', () => {
     // g = 9.80665 m/s² (3rd CGPM 1901)
-    expect(decelText(9.80665)).toBe('9.81 m/s² (1.00 g)')
+    expect(decelText(9.80665)).toBe('9.81\u00a0m/s² (1.00\u00a0g)')
     expect(hoursText(3.5)).toBe('3 h 30 min')
     expect(powerText(null)).toBe('—')
     expect(decelText(Number.NaN)).toBe('—')

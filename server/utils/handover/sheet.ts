@@ -12,6 +12,8 @@ import { carFactLines, figureLines, settingLines } from './words'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { recordedVersionActors } from '../history/recorded-names'
 
+// Decelerations with two decimals as the trade compares them; other measurements as typed.
+const numberWords = (k: string, v: number) => v.toLocaleString('en-GB', k === 'decelMs2' ? { minimumFractionDigits: 2, maximumFractionDigits: 2 } : { maximumFractionDigits: 2 })
 const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
 
 // In the order the check's guide lists its values (JSONB does not keep the order they were sent in).
@@ -19,7 +21,7 @@ function measured(key: string, values: Record<string, unknown>): string {
   const order = checkGuides.find(g => g.key === key)?.fields.map(f => f.name) ?? []
   const rank = (k: string) => (order.includes(k) ? order.indexOf(k) : order.length)
   return Object.entries(values ?? {}).sort(([a], [b]) => rank(a) - rank(b)).filter(([, v]) => v !== null && v !== undefined && v !== '')
-    .map(([k, v]) => typeof v === 'number' ? `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} ${units[k] ?? k}` : `${k}: ${String(v)}`).join(', ') || '—'
+    .map(([k, v]) => typeof v === 'number' ? `${numberWords(k, v)} ${units[k] ?? ''}`.trim() : k === 'feel' ? `felt ${String(v)}` : String(v)).join(', ') || '—'
 }
 
 // A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.

@@ -21,7 +21,7 @@ export function warning(rule: RuleId, severity: Severity, message: string, value
   return { rule, severity, message: `${message} ${DEFER}`, value, limit }
 }
 
-export const n = (x: number): string => formatNumber(x)
+export const n = (x: number, digits = 3): string => formatNumber(x, digits)
 
 // The driven wheels in plain words, and what happens when they lock under braking.
 export function drivenWheels(axle: VehicleSpec['drivenAxle']): { wheels: string, alone: string, lockup: string } {

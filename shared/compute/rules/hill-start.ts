@@ -10,6 +10,6 @@ export function hillStart(x: RuleInput): Warning[] {
     ? 'The driven wheels spin before the car moves, so more torque will not help: it needs more weight over the driven axle or grippier tyres.'
     : 'Raise the torque cap or fit lower gearing.'
   return [warning('hill-start', 'caution',
-    `From rest the car can pull away on a gradient of about ${n(grade)} % at most, less than the workshop's ${n(min)} % minimum: on a steep hill, ramp or trailer it may not move off, or may roll back. ${remedy}`,
+    `From rest the car can pull away on a gradient of about ${n(grade, 2)} % at most, less than the workshop's ${n(min)} % minimum: on a steep hill, ramp or trailer it may not move off, or may roll back. ${remedy}`,
     grade, min)]
 }
