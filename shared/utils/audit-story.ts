@@ -198,6 +198,7 @@ export function eventStory(e: HistoryEntry): EventStory {
     const key = path.split('/').pop() ?? ''
     if ((key === 'assigneeId' || key === 'ownerUserId') && v !== null && v !== undefined) return people[String(v)] ?? 'someone no longer listed'
     if (key === 'platformKey' && typeof v === 'string') return findPlatform(v)?.name ?? v
+    if (key === 'fits' && Array.isArray(v)) return v.map(obj).map(f => `${str(f.make) ?? ''} ${str(f.model) ?? ''} (${f.yearFrom ?? '…'}–${f.yearTo ?? '…'})`.trim()).join('; ') || 'none'
     if (key === 'platformKeys' && Array.isArray(v)) return v.length ? v.map(k => findPlatform(String(k))?.name ?? String(k)).join(', ') : 'none'
     // The unit goes with the value unless the field's label already names it ("Power cap, kW").
     const label = knownChangeLabel(e.entityType, path)
@@ -207,7 +208,8 @@ export function eventStory(e: HistoryEntry): EventStory {
     sentence: `${sentenceOf(e, d)}.`,
     facts: [...factsOf(e, d), ...(e.action === 'platform.created' ? platformSettings(e) : [])],
     checks: checksOf(d),
-    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path))
+    // A new record's empty fields (a pass-or-fail check's unit and limits) say nothing: left out.
+    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path) && !(created && (c.after === null || c.after === '')))
       .sort((a, b) => knownChangeRank(e.entityType, a.path) - knownChangeRank(e.entityType, b.path)).map(c => ({
       label: changePathLabel(c.path, e.entityType),
       before: c.beforeKnown ? changeValue(c.before, c.path) : null,

@@ -58,11 +58,12 @@ export function bytesText(bytes: number): string {
 const codeWords: Record<string, string> = {
   ...vehicleStatusLabels, ...versionStateLabels, ...snagStatusLabels, ...snagKindLabels, ...snagPriorityLabels,
   ...surfaceLabels, ...checkVerdictLabels, ...roleLabels, workshop: 'In the workshop', roadside: 'At the roadside',
+  front: 'Front wheels', rear: 'Rear wheels', all: 'All four wheels',
   file: 'A file from the controller', paste: 'Pasted from the controller', typed: 'Typed in by hand',
   // How a workshop's own road-test check is recorded.
   'pass-fail': 'Pass or fail', 'number': 'A measured number'
 }
-const codeKeys = new Set(['status', 'state', 'from', 'to', 'fromState', 'kind', 'priority', 'surface', 'verdict', 'roles', 'origin', 'source', 'record'])
+const codeKeys = new Set(['status', 'state', 'from', 'to', 'fromState', 'kind', 'priority', 'surface', 'verdict', 'roles', 'origin', 'source', 'record', 'drivenAxle'])
 
 export const stageWords = (code: unknown) => typeof code === 'string' ? (vehicleStatusLabels as Record<string, string>)[code]?.toLowerCase() ?? code : 'unknown'
 
@@ -75,7 +76,7 @@ export function valueText(value: unknown, key = ''): string {
   if (value === undefined) return '—'
   if (value === null) return 'none'
   if (typeof value === 'boolean') return value ? 'yes' : 'no'
-  if (typeof value === 'number') return measureText(value, key)
+  if (typeof value === 'number') return /year/i.test(key) ? String(value) : measureText(value, key) // 1967, not 1,967
   if (typeof value === 'string') {
     if (codeKeys.has(key) && codeWords[value]) return codeWords[value]
     if (isIsoMoment(value) && value.length > 10) return formatDateTime(value)

@@ -37,10 +37,16 @@ const checkLabels: Record<string, string> = {
   '/max': 'Highest allowed', '/required': 'Required on every road test', '/retired': 'Retired', '/platformKeys': 'Only for drive units (none: every one)'
 }
 
+// A conversion kit: its drive unit, the cars it fits and the typical car its baseline is checked on.
+const kitLabels: Record<string, string> = {
+  '/name': 'Name', '/platformKey': 'Drive unit', '/fits': 'Fits',
+  ...Object.fromEntries(specGroups.flatMap(g => g.fields).map(f => [`/specTemplate/${f.key}`, `Typical car: ${withUnit(f.label, f.unit).replace(/^./, c => c.toLowerCase())}`]))
+}
+
 // A read-back that differs marks the car as drifted.
 const readbackLabels: Record<string, string> = { '/driftedAt': 'Car marked as drifted' }
 
-const byEntity: Record<string, Record<string, string>> = { 'readback': readbackLabels, 'vehicle': carLabels, 'version': versionLabels, 'workshop': settingLabels, 'snag': snagLabels, 'user': userLabels, 'platform': platformLabels, 'workshop-check': checkLabels }
+const byEntity: Record<string, Record<string, string>> = { 'kit': kitLabels, 'readback': readbackLabels, 'vehicle': carLabels, 'version': versionLabels, 'workshop': settingLabels, 'snag': snagLabels, 'user': userLabels, 'platform': platformLabels, 'workshop-check': checkLabels }
 
 // A curve's point of a version's setting: "/parameters/throttleMap/2/y" is "Throttle map, point 3, torque".
 const curveProps = Object.fromEntries(platforms.flatMap(p => Object.entries(schemaProperties(p.schema))).filter(([, p]) => p.type === 'array'))

@@ -6,6 +6,7 @@ import { auditActionLabels } from '../../shared/utils/audit-actions'
 import { entryOf, legacySamples, samples } from './audit-story-fixtures'
 import { creationRows } from '../../shared/utils/audit-changes'
 import { internalNameIn } from './internal-names'
+import { platforms } from '../../shared/platforms'
 
 // Every action the product writes, read from its writers: each `action:` of an audit event in server/ and seeders/.
 function writtenActions(): Set<string> {
@@ -58,6 +59,16 @@ describe('the history in the workshop\'s words', () => {
     expect(auditors).toContain(entry.hash)
     expect(auditors).toContain(entry.prevHash)
     expect(auditors).toContain(`Event ${entry.id}`)
+  })
+
+  it('tells a kit by its drive unit, the cars it fits and its typical car in the workshop\'s words', () => {
+    const kit = eventStory(entryOf('kit.created', samples['kit.created']!))
+    const row = (label: string) => kit.changes.find(c => c.label === label)?.after
+    expect(row('Drive unit')).toBe(platforms[0]!.name)
+    expect(row('Fits')).toBe('Tregarth Minim (1959–1969)')
+    expect(row('Typical car: kerb mass (converted), kg')).toBe('640')
+    expect(row('Typical car: driven axle')).toBe('Rear wheels')
+    expect(visible(kit)).not.toMatch(/Spec template|Platform key|1,9\d\d/)
   })
 
   it('knows a code when it sees one, and a sentence when it does not', () => {
@@ -130,5 +141,7 @@ describe('the history in the workshop\'s words', () => {
     expect(visible(made)).not.toContain('tow-hitch')
     expect(made.auditors).toContainEqual({ label: 'Short code', value: 'tow-hitch' })
     expect(made.changes.find(c => c.label.startsWith('Only for drive units'))!.after).toBe('Quennel 95, Fenlow 45')
+    const passFail = eventStory(entryOf('workshop-check.created', { entityType: 'workshop-check', data: { after: { key: 'heater', label: 'Heater and demister', record: 'pass-fail', unit: null, min: null, max: null, required: false } } }))
+    expect(passFail.changes.map(c => c.label)).toEqual(['Check', 'Recorded as', 'Required on every road test'])
   })
 })
