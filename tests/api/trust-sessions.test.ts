@@ -98,8 +98,15 @@ describe('sessions after changes to the person, and the policy on answers', asyn
     // An error answer carries the server's own error policy, which allows no script either.
     const refused = await anonymous.call('GET', '/api/auth/me')
     expect(refused.status).toBe(401)
+    expect(refused.body.statusMessage).toBe('Unauthorized') // its own reason, not "Server Error"
     expect(refused.headers.get('content-security-policy') ?? '').not.toContain('{{nonce}}')
     expect(refused.headers.get('content-security-policy') ?? '').toMatch(/(script|default)-src 'none'/)
+    // A page that sends a signed-out visitor to sign in is an answer without a page.
+    for (const path of ['/cars', '/robots.txt', '/no-such-page']) {
+      const moved = await anonymous.call('GET', path, undefined, { accept: 'text/html' })
+      expect(moved.status).toBe(302)
+      expect(moved.headers.get('content-security-policy')).toBe('default-src \'none\'; frame-ancestors \'none\'')
+    }
   })
 
   it('pages keep their content security policy, with a real nonce', async () => {
