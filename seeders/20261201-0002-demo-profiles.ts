@@ -50,8 +50,8 @@ export async function addVersion({ qi, t, story }: SeedContext, car: Car, people
     event(decidedAt!, reviewerId, v.review.decision === 'approve' ? 'version.approved' : 'version.rejected', { reviewId: review!.id, comment: v.review.comment, contentHash })
   }
   if (v.state === 'signed-off') {
-    // When the road test seeder (20261201-0003) signs its drive: after the road test, as the server requires.
-    event(roadTestMoments(story, decidedAt!).signed, people['tester@voltwright.test']!, 'version.signed-off', { contentHash, note: 'Road test recorded on the workshop\'s paper sheet before the register was kept.' })
+    // When the road test seeder (20261201-0003) signs the drive it records: after the road test, as the server requires.
+    event(roadTestMoments(story, decidedAt!).signed, people['tester@voltwright.test']!, 'version.signed-off', { contentHash })
   }
   return { id, parameters }
 }
