@@ -11,6 +11,7 @@ import type { TelemetrySummary } from '../../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './words'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { recordedVersionActors } from '../history/recorded-names'
+import { localeNumber } from '../../../shared/utils/number-format'
 
 const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
 
@@ -19,13 +20,13 @@ function measured(key: string, values: Record<string, unknown>): string {
   const order = checkGuides.find(g => g.key === key)?.fields.map(f => f.name) ?? []
   const rank = (k: string) => (order.includes(k) ? order.indexOf(k) : order.length)
   return Object.entries(values ?? {}).sort(([a], [b]) => rank(a) - rank(b)).filter(([, v]) => v !== null && v !== undefined && v !== '')
-    .map(([k, v]) => typeof v === 'number' ? `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} ${units[k] ?? k}` : `${k}: ${String(v)}`).join(', ') || '—'
+    .map(([k, v]) => typeof v === 'number' ? `${localeNumber(v, { maximumFractionDigits: 2 })} ${units[k] ?? k}` : `${k}: ${String(v)}`).join(', ') || '—'
 }
 
 // A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.
 function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
   const def = list.find(d => d.key === c.key)
-  const value = def && typeof c.values?.value === 'number' ? `${c.values.value.toLocaleString('en-GB', { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
+  const value = def && typeof c.values?.value === 'number' ? `${localeNumber(c.values.value, { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
   return {
     label: def?.label ?? checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict,
     measured: def ? value : measured(c.key, c.values), note: c.note
@@ -34,9 +35,9 @@ function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
 
 function logLines(s: TelemetrySummary | undefined) {
   if (!s) return []
-  const f = (x: number | null, d = 1) => x === null ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: d })
+  const f = (x: number | null, d = 1) => x === null ? '—' : localeNumber(x, { maximumFractionDigits: d })
   return [
-    { label: 'Logged', value: `${s.samples.toLocaleString('en-GB')} samples over ${f(s.durationS / 60, 1)} min` },
+    { label: 'Logged', value: `${localeNumber(s.samples)} samples over ${f(s.durationS / 60, 1)} min` },
     { label: 'Peak speed', value: `${f(s.peakSpeedKph, 0)} km/h` },
     { label: 'Peak battery power', value: `${f(s.peakPowerKw, 1)} kW` },
     { label: 'Strongest lift-off slowing', value: `${f(s.peakLiftOffDecelMs2, 2)} m/s²` },

@@ -3,8 +3,9 @@ import { kphToMph, kwToHp, ROLES, roleSettings, schemaProperties, type Evaluatio
 import { settingLabel, settingValueWords } from '../../../shared/utils/setting-words'
 import type { HandoverLine } from '../../../shared/schemas/handover'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
+import { localeNumber } from '../../../shared/utils/number-format'
 
-const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: digits })
+const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : localeNumber(x, { maximumFractionDigits: digits })
 const kw = (x: number) => `${n(x, 1)} kW (${n(kwToHp(x))} hp)`
 const kph = (x: number | null) => x === null ? '—' : `${n(x)} km/h (${n(kphToMph(x))} mph)`
 
