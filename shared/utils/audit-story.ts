@@ -12,6 +12,7 @@ import { bytesText, keyLabel, numberText, stageWords, unitOf, valueText, wordsOf
 import { knownChangeLabel, knownChangeRank } from './change-labels'
 import { auditorRows, isAuditorKey } from './audit-auditors'
 import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
+import { localeNumber } from './number-format'
 
 export interface StoryRow { label: string, value: string }
 export interface StoryCheck { title: string, verdict: string, measured: string }
@@ -22,7 +23,7 @@ type Data = Record<string, unknown>
 const str = (x: unknown) => (typeof x === 'string' ? x : undefined)
 const num = (x: unknown) => (typeof x === 'number' && Number.isFinite(x) ? x : undefined)
 const obj = (x: unknown): Data => (x && typeof x === 'object' && !Array.isArray(x) ? x as Data : {})
-const plural = (n: number, one: string, many = `${one}s`) => `${n.toLocaleString('en-GB')} ${n === 1 ? one : many}`
+const plural = (n: number, one: string, many = `${one}s`) => `${localeNumber(n)} ${n === 1 ? one : many}`
 
 function versionName(e: HistoryEntry, d: Data): string {
   if (e.names.version) return e.names.version
@@ -158,7 +159,7 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
 function measuredText(key: CheckKey, name: string, v: unknown): string {
   const field = checkGuides.find(g => g.key === key)?.fields.find(f => f.name === name)
   if (!field || typeof v !== 'number') return `${keyLabel(name).replace(/, .*$/, '')} ${valueText(v, name)}`
-  const text = field.unit === 'm/s²' ? numberText(v, 2) : v.toLocaleString('en-GB', { maximumFractionDigits: field.step < 1 ? 1 : 0 })
+  const text = field.unit === 'm/s²' ? numberText(v, 2) : localeNumber(v, { maximumFractionDigits: field.step < 1 ? 1 : 0 })
   return `${field.label.replace(/, if measured$/, '')} ${text} ${field.unit}`
 }
 

@@ -11,9 +11,10 @@ import type { TelemetrySummary } from '../../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './words'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { recordedVersionActors } from '../history/recorded-names'
+import { localeNumber } from '../../../shared/utils/number-format'
 
 // Decelerations with two decimals as the trade compares them; other measurements as typed.
-const numberWords = (k: string, v: number) => v.toLocaleString('en-GB', k === 'decelMs2' ? { minimumFractionDigits: 2, maximumFractionDigits: 2 } : { maximumFractionDigits: 2 })
+const numberWords = (k: string, v: number) => localeNumber(v, k === 'decelMs2' ? { minimumFractionDigits: 2, maximumFractionDigits: 2 } : { maximumFractionDigits: 2 })
 const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
 
 // In the order the check's guide lists its values (JSONB does not keep the order they were sent in).
@@ -27,7 +28,7 @@ function measured(key: string, values: Record<string, unknown>): string {
 // A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.
 function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
   const def = list.find(d => d.key === c.key)
-  const value = def && typeof c.values?.value === 'number' ? `${c.values.value.toLocaleString('en-GB', { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
+  const value = def && typeof c.values?.value === 'number' ? `${localeNumber(c.values.value, { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
   return {
     label: def?.label ?? checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict,
     measured: def ? value : measured(c.key, c.values), note: c.note
@@ -36,9 +37,9 @@ function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
 
 function logLines(s: TelemetrySummary | undefined) {
   if (!s) return []
-  const f = (x: number | null, d = 1) => x === null ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: d })
+  const f = (x: number | null, d = 1) => x === null ? '—' : localeNumber(x, { maximumFractionDigits: d })
   return [
-    { label: 'Logged', value: `${s.samples.toLocaleString('en-GB')} samples over ${f(s.durationS / 60, 1)} min` },
+    { label: 'Logged', value: `${localeNumber(s.samples)} samples over ${f(s.durationS / 60, 1)} min` },
     { label: 'Peak speed', value: `${f(s.peakSpeedKph, 0)} km/h` },
     { label: 'Peak battery power', value: `${f(s.peakPowerKw, 1)} kW` },
     { label: 'Strongest lift-off slowing', value: `${f(s.peakLiftOffDecelMs2, 2)} m/s²` },
