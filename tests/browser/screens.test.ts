@@ -24,8 +24,18 @@ const sideways = (page: Page) => page.evaluate(() => document.documentElement.sc
 // A table meant to stack on a phone that still needs its own sideways scroll (columns out of sight).
 const overflowingTables = (page: Page) => page.locator('table.stack').evaluateAll(tables => tables
   .filter(t => t.scrollWidth > (t.parentElement?.clientWidth ?? 0) + 1).map(t => t.querySelector('caption')?.textContent ?? t.outerHTML.slice(0, 60)))
-// The page as read: closed "for auditors" parts are not rendered, so innerText leaves them out.
-const pageText = (page: Page) => page.evaluate(() => document.querySelector('main')?.innerText ?? document.body.innerText)
+// The page as read, each piece of text on its own (innerText runs side-by-side boxes together, "testingKJX"),
+// leaving out what is not rendered, such as the closed "for auditors" parts.
+const pageText = (page: Page) => page.evaluate(() => {
+  const root = document.querySelector('main') ?? document.body
+  const walker = document.createTreeWalker(root, NodeFilter.SHOW_TEXT)
+  const parts: string[] = []
+  for (let n = walker.nextNode(); n; n = walker.nextNode()) {
+    const el = n.parentElement
+    if (el && el.checkVisibility() && !el.closest('details:not([open]) > :not(summary)')) parts.push(n.textContent ?? '')
+  }
+  return parts.join(' ')
+})
 
 // The history as a person reads it: each event with the part for auditors folded away.
 const historyText = (page: Page) => page.locator('main ol > li').evaluateAll((items) => {

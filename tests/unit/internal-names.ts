@@ -7,12 +7,15 @@ import { vehicleStatuses } from '../../shared/schemas/vehicle'
 import { snagStatuses } from '../../shared/schemas/snag'
 import { auditActionLabels } from '../../shared/utils/audit-actions'
 
+// Codes that are also how the workshop speaks: "the signed-off settings", "the minimum hill-start gradient".
+const english = new Set(['signed-off', 'hill-start', 'stop-lamp'])
+
 // Codes of more than one word ("lift-off-regen", "road-testing", "version.signed-off"): a plain word such as
 // "draft" or "pass" is also English, a joined code is not.
 export const codeWords = [...new Set<string>([
   ...mandatoryCheckKeys, ...checkVerdicts, ...Object.keys(ruleTitles), ...versionStates, ...vehicleStatuses, ...snagStatuses,
   ...Object.keys(auditActionLabels)
-].filter(c => /[-.]/.test(c) && c !== 'signed-off'))] // "the signed-off settings" is also how the workshop speaks
+].filter(c => /[-.]/.test(c) && !english.has(c)))]
 
 // "hill-start" on its own, not the "hill-start" inside "uphill-starts" nor a sentence's "lift-off regen".
 // "full-power pull" is the check's own name in words.
