@@ -11,6 +11,7 @@ const idLabels: Record<string, string> = {
   versionId: 'Version record', profileId: 'Profile record', roadTestId: 'Road test record', reviewId: 'Review record',
   parentVersionId: 'Drafted from version record', supersededVersionId: 'Replaced version record', attachmentId: 'File record',
   telemetryLogId: 'Controller log record', contentHash: 'Settings hash at this step', versionContentHash: 'Version\'s settings hash',
+  kitId: 'Kit record', baselineVersionId: 'Kit baseline version record',
   sha256: 'File SHA-256', lockVersion: 'Save number', because: 'Because of'
 }
 

@@ -3,13 +3,15 @@
 // record numbers and hashes. Nothing in the main text is a field name, a code or raw JSON (docs/history.md).
 import type { HistoryEntry } from '../schemas/history'
 import { ruleTitles } from '../compute/rule-titles'
-import { checkGuides, checkTitles } from '../schemas/road-test-checks'
+import { checkTitles } from '../schemas/road-test-checks'
+import { measuredValues } from './check-measures'
 import type { CheckKey } from '../schemas/road-test'
 import { summaryRows } from '../telemetry/summary-rows'
 import { findPlatform } from '../platforms'
 import { changePathLabel } from './audit-actions'
 import { bytesText, keyLabel, numberText, stageWords, unitOf, valueText, wordsOf } from './audit-values'
-import { knownChangeLabel } from './change-labels'
+import { changeOrder, knownChangeLabel } from './change-labels'
+import { fitsText, type KitFit } from '../schemas/kit'
 import { auditorRows, isAuditorKey } from './audit-auditors'
 import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
 
@@ -41,7 +43,8 @@ function sentenceOf(e: HistoryEntry, d: Data): string {
     case 'vehicle.created': {
       const car = [after.year ?? d.year, after.make ?? d.make, after.model ?? d.model].filter(Boolean).join(' ')
       const ref = str(after.stockRef) ?? str(d.stockRef) ?? e.vehicle?.stockRef
-      return `${who} booked in ${car || 'the car'}${ref ? ` as ${ref}` : ''}`
+      const kit = str(d.kitName) ? ` from the kit ${d.kitName}${num(d.baselineVersionNo) ? `, on its baseline v${d.baselineVersionNo}` : ''}` : ''
+      return `${who} booked in ${car || 'the car'}${ref ? ` as ${ref}` : ''}${kit}`
     }
     case 'vehicle.updated': return `${who} changed the car's facts`
     case 'vehicle.drift-cleared': return `${who} cleared the car's drift warning${e.names.version ? ` with ${e.names.version} signed off` : ''}`
@@ -96,7 +99,17 @@ function sentenceOf(e: HistoryEntry, d: Data): string {
 
 // Keys a sentence or a section already tells, or that belong only to the auditors' part.
 const told = new Set(['versionNo', 'profileName', 'profile', 'parentVersionNo', 'vehicleStatus', 'unresolvedSnags', 'dangerCount', 'from', 'to', 'because',
-  'passwordChanged', 'name', 'after', 'result', 'recheckId', 'verdict', 'checks', 'parameters', 'patchFromParent', 'filename', 'matches', 'stockRef', 'make', 'model', 'year', 'signed'])
+  'passwordChanged', 'name', 'after', 'kitName', 'baselineVersionNo', 'result', 'recheckId', 'verdict', 'checks', 'parameters', 'patchFromParent', 'filename', 'matches', 'stockRef', 'make', 'model', 'year', 'signed'])
+
+// "Regen against grip, snow (danger, 2 warnings); Stop lamps and regen (UN R13-H) (note)"
+function warningsText(ws: Data[]): string {
+  const counts = new Map<string, number>()
+  for (const w of ws) {
+    const text = `${ruleTitles[w.rule as keyof typeof ruleTitles]?.title ?? wordsOf(String(w.rule))} (${w.severity === 'info' ? 'note' : String(w.severity)}`
+    counts.set(text, (counts.get(text) ?? 0) + 1)
+  }
+  return [...counts].map(([text, n]) => `${text}${n > 1 ? `, ${n} warnings` : ''})`).join('; ') || 'none'
+}
 
 // "Lift-off regen: 25 % signed off, 50 % found"
 function differenceText(x: Data): string {
@@ -115,7 +128,7 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
       const c = obj(v)
       add('Conditions', [valueText(c.surface, 'surface'), valueText(c.ambientC, 'ambientC'), str(c.route)].filter(Boolean).join(', '))
     } else if ((k === 'warnings' || k === 'newWarnings') && Array.isArray(v)) {
-      add(k === 'warnings' ? 'Warnings' : 'New warnings', v.map((w: Data) => `${ruleTitles[w.rule as keyof typeof ruleTitles]?.title ?? wordsOf(String(w.rule))} (${w.severity})`).join('; ') || 'none')
+      add(k === 'warnings' ? 'Warnings' : 'New warnings', warningsText(v as Data[]))
     } else if (k === 'justifications') {
       for (const [rule, text] of Object.entries(obj(v))) add(`Why it is safe: ${ruleTitles[rule as keyof typeof ruleTitles]?.title ?? wordsOf(rule)}`, valueText(text))
     } else if (k === 'differences' && Array.isArray(v)) {
@@ -139,21 +152,12 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
   return facts
 }
 
-// A measured value by the check's own field: "Roll-back 40 mm", "0–50 km/h 4.1 s", "Feel firm".
-function measuredText(key: CheckKey, name: string, v: unknown): string {
-  const field = checkGuides.find(g => g.key === key)?.fields.find(f => f.name === name)
-  if (!field || typeof v !== 'number') return `${keyLabel(name).replace(/, .*$/, '')} ${valueText(v, name)}`
-  const text = field.unit === 'm/s²' ? numberText(v, 2) : v.toLocaleString('en-GB', { maximumFractionDigits: field.step < 1 ? 1 : 0 })
-  return `${field.label.replace(/, if measured$/, '')} ${text} ${field.unit}`
-}
-
 function checksOf(d: Data): StoryCheck[] {
   if (!Array.isArray(d.checks)) return []
   return d.checks.map((c: Data) => ({
     title: checkTitles[c.key as CheckKey] ?? wordsOf(String(c.key)),
     verdict: valueText(c.verdict, 'verdict'),
-    measured: Object.entries(obj(c.values)).filter(([, v]) => v !== null && v !== undefined)
-      .map(([k, v]) => measuredText(c.key as CheckKey, k, v)).join(', ')
+    measured: measuredValues(String(c.key), obj(c.values)).join(', ')
   }))
 }
 
@@ -171,12 +175,16 @@ function platformSettings(e: HistoryEntry): StoryRow[] {
 export function eventStory(e: HistoryEntry): EventStory {
   const d: Data = { ...e.details, after: createdState(e) }
   const people = e.names.people
+  const checkUnit = str(obj(d.after).unit) ?? str(e.changes.find(c => c.path === '/unit')?.after)
   const created = /\.created$/.test(e.action) && e.changes.length > 0 && e.changes.every(c => c.op === 'add' && c.before === undefined)
   const changeValue = (v: unknown, path: string) => {
     const key = path.split('/').pop() ?? ''
     if ((key === 'assigneeId' || key === 'ownerUserId') && v !== null && v !== undefined) return people[String(v)] ?? 'someone no longer listed'
     if (key === 'platformKey' && typeof v === 'string') return findPlatform(v)?.name ?? v
-    if (key === 'platformKeys' && Array.isArray(v)) return v.length ? v.map(k => findPlatform(String(k))?.name ?? String(k)).join(', ') : 'none'
+    if (key === 'platformKeys' && (Array.isArray(v) || v === null)) return v?.length ? v.map(k => findPlatform(String(k))?.name ?? String(k)).join(', ') : 'every drive unit'
+    if (key === 'fits' && Array.isArray(v)) return v.length ? fitsText(v as KitFit[]) : 'no cars listed'
+    // A road-test check's limits in the check's own unit.
+    if (e.entityType === 'workshop-check' && (key === 'min' || key === 'max') && typeof v === 'number') return `${numberText(v)}${checkUnit ? ` ${checkUnit}` : ''}`
     // The unit goes with the value unless the field's label already names it ("Power cap, kW").
     const label = knownChangeLabel(e.entityType, path)
     return valueText(v, label && /, \S+$/.test(label) && unitOf(key) ? '' : key)
@@ -185,7 +193,8 @@ export function eventStory(e: HistoryEntry): EventStory {
     sentence: `${sentenceOf(e, d)}.`,
     facts: [...factsOf(e, d), ...(e.action === 'platform.created' ? platformSettings(e) : [])],
     checks: checksOf(d),
-    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path)).map(c => ({
+    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path) && !(created && unsetCheckLimit(e, c.path, c.after)))
+      .sort((a, b) => changeOrder(e.entityType, a.path) - changeOrder(e.entityType, b.path)).map(c => ({
       label: changePathLabel(c.path, e.entityType),
       before: c.beforeKnown ? changeValue(c.before, c.path) : null,
       after: c.op === 'remove' ? 'removed' : changeValue(c.after, c.path),
@@ -195,6 +204,9 @@ export function eventStory(e: HistoryEntry): EventStory {
     auditors: [...auditorRows(e), ...e.changes.filter(c => codePath(e, c.path) && c.op !== 'remove').map(c => ({ label: 'Short code', value: String(c.after) }))]
   }
 }
+
+// A pass-or-fail check is created with no limits or unit: nothing to say about them.
+const unsetCheckLimit = (e: HistoryEntry, path: string, v: unknown) => e.entityType === 'workshop-check' && ['/min', '/max', '/unit'].includes(path) && v === null
 
 // A drive unit's or a check's short code is how the software knows it, not how people name it: for auditors only.
 const codePath = (e: HistoryEntry, path: string) => path === '/key' && (e.entityType === 'platform' || e.entityType === 'workshop-check')

@@ -45,6 +45,7 @@ export function numberText(x: number, decimals?: number, upTo = false): string {
 // "1.20 m/s²" (decelerations keep two figures, as the trade compares them), "134 Wh", "9 °C", "5 %"
 export function measureText(x: number | null | undefined, key: string): string {
   if (x === null || x === undefined) return '—'
+  if (/year/i.test(key) && Number.isInteger(x)) return String(x) // 1967, not 1,967
   const u = unitOf(key)
   return u ? `${numberText(x, u.decimals, u.unit !== 'm/s²')} ${u.unit}` : numberText(x)
 }
@@ -62,6 +63,7 @@ const codeWords: Record<string, string> = {
   // How a workshop's own road-test check is recorded.
   'pass-fail': 'Pass or fail', 'number': 'A measured number'
 }
+const axleWords: Record<string, string> = { front: 'Front wheels', rear: 'Rear wheels', all: 'All four wheels' }
 const codeKeys = new Set(['status', 'state', 'from', 'to', 'fromState', 'kind', 'priority', 'surface', 'verdict', 'roles', 'origin', 'source', 'record'])
 
 export const stageWords = (code: unknown) => typeof code === 'string' ? (vehicleStatusLabels as Record<string, string>)[code]?.toLowerCase() ?? code : 'unknown'
@@ -78,6 +80,7 @@ export function valueText(value: unknown, key = ''): string {
   if (typeof value === 'number') return measureText(value, key)
   if (typeof value === 'string') {
     if (codeKeys.has(key) && codeWords[value]) return codeWords[value]
+    if (key === 'drivenAxle' && axleWords[value]) return axleWords[value]
     if (isIsoMoment(value) && value.length > 10) return formatDateTime(value)
     return value === '' ? '(empty)' : value
   }

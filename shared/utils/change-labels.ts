@@ -26,18 +26,24 @@ const settingLabels: Record<string, string> = {
 }
 
 const snagLabels: Record<string, string> = {
-  '/kind': 'Kind', '/title': 'Snag', '/detail': 'Detail', '/status': 'Status', '/blocking': 'Blocks sign-off', '/priority': 'Priority', '/assigneeId': 'Assigned to'
+  '/title': 'Snag', '/kind': 'Kind', '/priority': 'Priority', '/status': 'Status', '/blocking': 'Blocks sign-off', '/assigneeId': 'Assigned to', '/detail': 'Detail'
 }
 
 const userLabels: Record<string, string> = { '/name': 'Name', '/email': 'E-mail', '/roles': 'Roles', '/active': 'Can sign in' }
 const platformLabels: Record<string, string> = { '/name': 'Name', '/key': 'Short name', '/motorMaxRpm': 'Highest motor speed, rpm' }
 
 const checkLabels: Record<string, string> = {
-  '/key': 'Short name', '/label': 'Check', '/record': 'Recorded as', '/unit': 'Unit', '/min': 'Lowest allowed',
-  '/max': 'Highest allowed', '/required': 'Required on every road test', '/retired': 'Retired', '/platformKeys': 'Only for drive units (none: every one)'
+  '/label': 'Check', '/record': 'Recorded as', '/min': 'Lowest allowed', '/max': 'Highest allowed', '/unit': 'Unit',
+  '/required': 'Required on every road test', '/platformKeys': 'For drive units', '/retired': 'Retired', '/key': 'Short name'
 }
 
-const byEntity: Record<string, Record<string, string>> = { 'vehicle': carLabels, 'version': versionLabels, 'workshop': settingLabels, 'snag': snagLabels, 'user': userLabels, 'platform': platformLabels, 'workshop-check': checkLabels }
+// A conversion kit: its name, drive unit, the cars it fits and its typical car's facts.
+const kitLabels: Record<string, string> = {
+  '/name': 'Name', '/platformKey': 'Drive unit', '/fits': 'Fits',
+  ...Object.fromEntries(specGroups.flatMap(g => g.fields).map(f => [`/specTemplate/${f.key}`, withUnit(`Typical car › ${f.label}`, f.unit)]))
+}
+
+const byEntity: Record<string, Record<string, string>> = { 'vehicle': carLabels, 'version': versionLabels, 'workshop': settingLabels, 'snag': snagLabels, 'user': userLabels, 'platform': platformLabels, 'workshop-check': checkLabels, 'kit': kitLabels }
 
 // A curve's point of a version's setting: "/parameters/throttleMap/2/y" is "Throttle map, point 3, torque".
 const curveProps = Object.fromEntries(platforms.flatMap(p => Object.entries(schemaProperties(p.schema))).filter(([, p]) => p.type === 'array'))
@@ -53,4 +59,12 @@ function pointLabel(path: string): string | undefined {
 export function knownChangeLabel(entityType: string | undefined, path: string): string | undefined {
   if (!entityType) return undefined
   return byEntity[entityType]?.[path] ?? (entityType === 'version' ? pointLabel(path) : undefined)
+}
+
+// Where a field stands among its record's rows: in the order its labels are listed (a drive unit's settings in
+// its schema's order), fields with no label of their own after them.
+export function changeOrder(entityType: string | undefined, path: string): number {
+  const keys = Object.keys((entityType && byEntity[entityType]) || {})
+  const i = keys.indexOf(path)
+  return i < 0 ? keys.length : i
 }

@@ -4,7 +4,8 @@ import type { RecordedCheck } from '../../../shared/schemas/workshop-checks'
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
 import { handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
-import { checkGuides, checkTitles } from '../../../shared/schemas/road-test-checks'
+import { checkTitles } from '../../../shared/schemas/road-test-checks'
+import { measuredValues } from '../../../shared/utils/check-measures'
 import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
 import type { TelemetrySummary } from '../../../shared/telemetry/summary'
@@ -12,23 +13,13 @@ import { carFactLines, figureLines, settingLines } from './words'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { recordedVersionActors } from '../history/recorded-names'
 
-const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
-
-// In the order the check's guide lists its values (JSONB does not keep the order they were sent in).
-function measured(key: string, values: Record<string, unknown>): string {
-  const order = checkGuides.find(g => g.key === key)?.fields.map(f => f.name) ?? []
-  const rank = (k: string) => (order.includes(k) ? order.indexOf(k) : order.length)
-  return Object.entries(values ?? {}).sort(([a], [b]) => rank(a) - rank(b)).filter(([, v]) => v !== null && v !== undefined && v !== '')
-    .map(([k, v]) => typeof v === 'number' ? `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} ${units[k] ?? k}` : `${k}: ${String(v)}`).join(', ') || '—'
-}
-
 // A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.
 function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
   const def = list.find(d => d.key === c.key)
   const value = def && typeof c.values?.value === 'number' ? `${c.values.value.toLocaleString('en-GB', { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
   return {
     label: def?.label ?? checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict,
-    measured: def ? value : measured(c.key, c.values), note: c.note
+    measured: def ? value : measuredValues(c.key, c.values).join(', ') || '—', note: c.note
   }
 }
 
@@ -39,7 +30,7 @@ function logLines(s: TelemetrySummary | undefined) {
     { label: 'Logged', value: `${s.samples.toLocaleString('en-GB')} samples over ${f(s.durationS / 60, 1)} min` },
     { label: 'Peak speed', value: `${f(s.peakSpeedKph, 0)} km/h` },
     { label: 'Peak battery power', value: `${f(s.peakPowerKw, 1)} kW` },
-    { label: 'Strongest lift-off slowing', value: `${f(s.peakLiftOffDecelMs2, 2)} m/s²` },
+    { label: 'Strongest lift-off slowing', value: `${s.peakLiftOffDecelMs2 === null ? '—' : s.peakLiftOffDecelMs2.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²` },
     { label: 'Roll-back on the hill start', value: `${f(s.maxRollbackM * 1000, 0)} mm` },
     { label: 'Peak temperatures', value: `motor ${f(s.peakMotorC, 0)} °C, inverter ${f(s.peakInverterC, 0)} °C, battery ${f(s.peakBatteryC, 0)} °C` },
     { label: 'Energy', value: `${f(s.energyOutWh / 1000, 2)} kWh used, ${f(s.energyRegenWh / 1000, 2)} kWh recovered by regen` }
