@@ -5,6 +5,8 @@ import type { HandoverLine } from '../../../shared/schemas/handover'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 
 const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: digits })
+// Decelerations keep two decimals, as the trade compares them (0.50 m/s² against a 0.70 m/s² threshold).
+const ms2 = (x: number) => `${x.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²`
 const kw = (x: number) => `${n(x, 1)} kW (${n(kwToHp(x))} hp)`
 const kph = (x: number | null) => x === null ? '—' : `${n(x)} km/h (${n(kphToMph(x))} mph)`
 
@@ -42,7 +44,7 @@ export function figureLines(e: Evaluation, spec: VehicleSpec): HandoverLine[] {
     { label: '0–100 km/h (0–62 mph)', value: f.zeroTo100S === null ? 'not reached' : `${n(f.zeroTo100S, 1)} s` },
     { label: 'Top speed', value: kph(f.topSpeedKph), note: f.topSpeedLimitedBy ? `Limited by ${limited[f.topSpeedLimitedBy] ?? f.topSpeedLimitedBy}.` : undefined },
     { label: 'Steepest hill it can start on', value: f.maxStartGradePct === null ? '—' : `${n(f.maxStartGradePct)} % (1 in ${n(100 / Math.max(f.maxStartGradePct, 0.1))})`, note: f.startGradeLimitedBy === 'traction' ? 'Limited by grip on a dry road.' : 'Limited by the motor\'s torque.' },
-    { label: 'Lift-off slowing at 50 km/h', value: f.liftOffDecelMs2 === null ? '—' : `${n(f.liftOffDecelMs2, 2)} m/s²` },
+    { label: 'Lift-off slowing at 50 km/h', value: f.liftOffDecelMs2 === null ? '—' : ms2(f.liftOffDecelMs2) },
     { label: 'Power against the original engine', value: f.powerRatioToOriginal === null ? '—' : `${n(f.powerRatioToOriginal, 2)} × the original ${n(spec.originalEnginePowerKw)} kW` },
     { label: 'Charging from 10 % to 80 %', value: f.chargeTime10to80H === null ? '—' : `about ${n(f.chargeTime10to80H, 1)} h on a ${n(spec.chargerPowerKw, 1)} kW charger` }
   ]
