@@ -38,8 +38,10 @@ const regenAxle: Record<'front' | 'rear' | 'all', string> = {
   all: 'On this car it brakes all four wheels through the drive: on wet, icy or loose roads, lift off gently and allow more distance.'
 }
 
-export function handoverCautions(drivenAxle: 'front' | 'rear' | 'all'): string[] {
-  return HANDOVER_CAUTIONS.map(c => c.startsWith('Regenerative braking') ? `Regenerative braking slows the car when you lift off the accelerator. ${regenAxle[drivenAxle]}` : c)
+// `driftFoundOn`: the day a read-back of the controller last found settings other than these (the car has drifted).
+export function handoverCautions(drivenAxle: 'front' | 'rear' | 'all', driftFoundOn?: string): string[] {
+  const drift = driftFoundOn ? [`On ${driftFoundOn} the controller was found holding settings other than those on this sheet. Until the workshop has put the signed-off settings back and read them back, do not rely on this sheet: the car may pull, slow and hold differently, and should not be driven before a qualified engineer has checked it.`] : []
+  return [...drift, ...HANDOVER_CAUTIONS.map(c => c.startsWith('Regenerative braking') ? `Regenerative braking slows the car when you lift off the accelerator. ${regenAxle[drivenAxle]}` : c)]
 }
 
 export const HANDOVER_CAUTIONS = [

@@ -37,4 +37,11 @@ describe('the handover sheet in the owner\'s words', () => {
     expect(regen('all')).toContain('all four wheels')
     expect(handoverCautions('front')).toHaveLength(5)
   })
+
+  it('says first, on a car whose controller was found drifted, not to rely on the sheet until a qualified engineer has checked it', () => {
+    const cautions = handoverCautions('rear', '3 Dec 2026')
+    expect(cautions).toHaveLength(6)
+    expect(cautions[0]).toMatch(/^On 3 Dec 2026 the controller was found holding settings other than those on this sheet/)
+    expect(cautions[0]).toContain('qualified engineer')
+  })
 })

@@ -6,6 +6,7 @@ import { handoverCautions, type HandoverProfile, type HandoverSheet } from '../.
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
 import { checkTitles } from '../../../shared/schemas/road-test-checks'
 import { measuredValues } from '../../../shared/utils/check-measures'
+import { formatDate } from '../../../shared/utils/dates'
 import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
 import type { TelemetrySummary } from '../../../shared/telemetry/summary'
@@ -84,6 +85,6 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
     carFacts: carFactLines(vehicle.spec, vehicle.platform?.name ?? ''),
     profiles: await Promise.all(onCar.map(p => profileSheet(vehicle, p, versions.find(v => v.id === p.onCarVersionId)!))),
     enhancements: enhancements.map(s => ({ title: s.title, detail: s.detail, priority: snagPriorityLabels[s.priority as SnagPriority] })),
-    cautions: handoverCautions(vehicle.spec.drivenAxle)
+    cautions: handoverCautions(vehicle.spec.drivenAxle, vehicle.driftedAt ? formatDate(vehicle.driftedAt, { timeZone: 'UTC' }) : undefined)
   }
 }
