@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest'
 import { settingLines } from '../../server/utils/handover/words'
-import { handoverCautions } from '../../shared/schemas/handover'
+import { driftNotice, handoverCautions } from '../../shared/schemas/handover'
 import { fenlow45 } from '../../shared/platforms/fenlow-45'
 import { quennel95 } from '../../shared/platforms/quennel-95'
 import { ROLES, roleSettings } from '../../shared/compute'
@@ -38,10 +38,10 @@ describe('the handover sheet in the owner\'s words', () => {
     expect(handoverCautions('front')).toHaveLength(5)
   })
 
-  it('says first, on a car whose controller was found drifted, not to rely on the sheet until a qualified engineer has checked it', () => {
-    const cautions = handoverCautions('rear', '3 Dec 2026')
-    expect(cautions).toHaveLength(6)
-    expect(cautions[0]).toMatch(/^On 3 Dec 2026 the controller was found holding settings other than those on this sheet/)
-    expect(cautions[0]).toContain('qualified engineer')
+  it('tells the owner of a car whose controller was found drifted not to rely on the sheet until a qualified engineer has checked it', () => {
+    const notice = driftNotice('3 Dec 2026')
+    expect(notice).toMatch(/^On 3 Dec 2026 the controller was found holding settings other than those on this sheet/)
+    expect(notice).toContain('do not rely on this sheet')
+    expect(notice).toContain('qualified engineer')
   })
 })

@@ -2,7 +2,7 @@ import type { RecordedCheck } from '../../../shared/schemas/workshop-checks'
 // Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
-import { handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
+import { driftNotice, handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
 import { checkTitles } from '../../../shared/schemas/road-test-checks'
 import { measuredValues } from '../../../shared/utils/check-measures'
@@ -85,6 +85,7 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
     carFacts: carFactLines(vehicle.spec, vehicle.platform?.name ?? ''),
     profiles: await Promise.all(onCar.map(p => profileSheet(vehicle, p, versions.find(v => v.id === p.onCarVersionId)!))),
     enhancements: enhancements.map(s => ({ title: s.title, detail: s.detail, priority: snagPriorityLabels[s.priority as SnagPriority] })),
-    cautions: handoverCautions(vehicle.spec.drivenAxle, vehicle.driftedAt ? formatDate(vehicle.driftedAt, { timeZone: 'UTC' }) : undefined)
+    cautions: handoverCautions(vehicle.spec.drivenAxle),
+    notice: vehicle.driftedAt ? driftNotice(formatDate(vehicle.driftedAt, { timeZone: 'UTC' })) : null
   }
 }
