@@ -1,6 +1,5 @@
 import { fileURLToPath } from 'node:url'
-
-const NON_PAGE_CSP = "default-src 'none'; frame-ancestors 'none'"
+import { NON_PAGE_CSP } from './shared/security-policy'
 
 // Voltwright: Nuxt 4 app, Nitro server routes, PostgreSQL through Sequelize.
 export default defineNuxtConfig({

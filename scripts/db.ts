@@ -10,10 +10,6 @@ const sequelize = new Sequelize(url, { dialect: 'postgres', dialectModule: pg, l
 const context = sequelize.getQueryInterface()
 
 const migrator = new Umzug({ migrations, context, storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }), logger: undefined })
-async function seeder() {
-  const { seeders } = await import('../seeders')
-  return new Umzug({ migrations: seeders, context, storage: new SequelizeStorage({ sequelize, tableName: 'seed_runs' }), logger: undefined })
-}
 
 const task = process.argv[2]
 try {
@@ -23,8 +19,9 @@ try {
     const done = await migrator.up()
     console.log(`[voltwright] migrations: ${done.length ? done.map(m => m.name).join(', ') : 'up to date'}`)
   } else if (task === 'seed') {
-    const done = await (await seeder()).up()
-    console.log(`[voltwright] demo data: ${done.length ? done.map(m => m.name).join(', ') : 'already there'}`)
+    const { seedDemo } = await import('../seeders/run')
+    const done = await seedDemo(sequelize)
+    console.log(`[voltwright] demo data: ${done.length ? done.join(', ') : 'already there'}`)
   } else if (task === 'down') {
     await migrator.down()
   } else {

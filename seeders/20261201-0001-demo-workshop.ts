@@ -4,8 +4,8 @@ import { Hash } from '@adonisjs/hash'
 import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
 import { firstPlatforms as platforms } from '../shared/platforms'
 import { vehicleSpecSchema } from '../shared/schemas/vehicle-spec'
-import { appendAuditEvent } from '../server/utils/history/audit'
 import { demoCars, secondWorkshopCar, type DemoCar } from './demo-cars'
+import type { DemoStory, SeedContext } from './demo-story'
 
 // Demo only: every demo person signs in with this password (README).
 const DEMO_PASSWORD = 'voltwright-demo'
@@ -29,40 +29,42 @@ async function insert(qi: QueryInterface, t: Transaction, sql: string, replaceme
   return row!.id
 }
 
-async function addPeople(qi: QueryInterface, t: Transaction, workshopId: number, people: typeof demoPeople, passwordHash: string) {
+// A workshop and its people, set up the day before its first car came in.
+async function addWorkshop(qi: QueryInterface, t: Transaction, name: string, people: typeof demoPeople, passwordHash: string, at: Date) {
+  const workshopId = await insert(qi, t, `INSERT INTO workshops (name, settings, "createdAt", "updatedAt") VALUES (:name, '{}', :at, :at) RETURNING id`, { name, at })
   const ids: Record<string, number> = {}
   for (const p of people) {
-    ids[p.email] = await insert(qi, t, `INSERT INTO users ("workshopId", email, name, "passwordHash", roles) VALUES (:workshopId, :email, :name, :passwordHash, ARRAY[:roles]::text[]) RETURNING id`, { workshopId, ...p, passwordHash })
+    ids[p.email] = await insert(qi, t, `INSERT INTO users ("workshopId", email, name, "passwordHash", roles, "createdAt", "updatedAt") VALUES (:workshopId, :email, :name, :passwordHash, ARRAY[:roles]::text[], :at, :at) RETURNING id`, { workshopId, ...p, passwordHash, at })
   }
-  return ids
+  return { workshopId, people: ids }
 }
 
-async function addCar(qi: QueryInterface, t: Transaction, workshopId: number, car: DemoCar, platformIds: number[], ownerId: number | null, actorId: number) {
+// A car entered at its intake date (seeders/demo-cars.ts).
+async function addCar(qi: QueryInterface, t: Transaction, story: DemoStory, workshopId: number, car: DemoCar, platformIds: number[], ownerId: number | null, actorId: number) {
   const spec = vehicleSpecSchema.parse(car.spec)
-  const id = await insert(qi, t, `INSERT INTO vehicles ("workshopId", "stockRef", make, model, year, "chassisNumber", registration, "ownerUserId", status, spec, "platformId")
-    VALUES (:workshopId, :stockRef, :make, :model, :year, :chassisNumber, :registration, :ownerId, :status, CAST(:spec AS jsonb), :platformId) RETURNING id`,
-  { workshopId, ...car, ownerId, spec: JSON.stringify(spec), platformId: platformIds[car.platformIndex] })
-  await appendAuditEvent(t, { workshopId, vehicleId: id, actorId, action: 'vehicle.created', entityType: 'vehicle', entityId: id, data: { stockRef: car.stockRef, make: car.make, model: car.model, status: car.status } })
+  const at = story.day(car.intakeDaysAgo, '08:30')
+  const id = await insert(qi, t, `INSERT INTO vehicles ("workshopId", "stockRef", make, model, year, "chassisNumber", registration, "ownerUserId", status, spec, "platformId", "createdAt", "updatedAt")
+    VALUES (:workshopId, :stockRef, :make, :model, :year, :chassisNumber, :registration, :ownerId, :status, CAST(:spec AS jsonb), :platformId, :at, :at) RETURNING id`,
+  { workshopId, ...car, ownerId, spec: JSON.stringify(spec), platformId: platformIds[car.platformIndex], at })
+  story.add(at, { workshopId, vehicleId: id, actorId, action: 'vehicle.created', entityType: 'vehicle', entityId: id, data: { stockRef: car.stockRef, make: car.make, model: car.model, status: car.status } })
 }
 
-export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
-  const passwordHash = await new Hash(new Scrypt({})).make(DEMO_PASSWORD)
-  await qi.sequelize.transaction(async (t) => {
-    const platformIds: number[] = []
-    for (const p of platforms) {
-      platformIds.push(await insert(qi, t, `INSERT INTO platforms (key, name, "motorMaxRpm", schema) VALUES (:key, :name, :motorMaxRpm, CAST(:schema AS jsonb)) RETURNING id`, { ...p, schema: JSON.stringify(p.schema) }))
-    }
-    const workshopId = await insert(qi, t, `INSERT INTO workshops (name, settings) VALUES (:name, '{}') RETURNING id`, { name: 'Old Forge Electric Works' })
-    const people = await addPeople(qi, t, workshopId, demoPeople, passwordHash)
-    for (const car of demoCars) await addCar(qi, t, workshopId, car, platformIds, car.ownedByClient ? people['client@voltwright.test']! : null, people['admin@voltwright.test']!)
+const setUpBefore = (story: DemoStory, cars: DemoCar[]) => story.day(Math.max(...cars.map(c => c.intakeDaysAgo)) + 1, '08:00')
 
-    const secondId = await insert(qi, t, `INSERT INTO workshops (name, settings) VALUES (:name, '{}') RETURNING id`, { name: 'Second Bay Motor Conversions' })
-    const second = await addPeople(qi, t, secondId, secondPeople, passwordHash)
-    await addCar(qi, t, secondId, secondWorkshopCar, platformIds, null, second['admin@second.voltwright.test']!)
-  })
+export const up: MigrationFn<SeedContext> = async ({ context: { qi, t, story } }) => {
+  const passwordHash = await new Hash(new Scrypt({})).make(DEMO_PASSWORD)
+  const platformIds: number[] = []
+  for (const p of platforms) {
+    platformIds.push(await insert(qi, t, `INSERT INTO platforms (key, name, "motorMaxRpm", schema) VALUES (:key, :name, :motorMaxRpm, CAST(:schema AS jsonb)) RETURNING id`, { ...p, schema: JSON.stringify(p.schema) }))
+  }
+  const first = await addWorkshop(qi, t, 'Old Forge Electric Works', demoPeople, passwordHash, setUpBefore(story, demoCars))
+  for (const car of demoCars) await addCar(qi, t, story, first.workshopId, car, platformIds, car.ownedByClient ? first.people['client@voltwright.test']! : null, first.people['admin@voltwright.test']!)
+
+  const second = await addWorkshop(qi, t, 'Second Bay Motor Conversions', secondPeople, passwordHash, setUpBefore(story, [secondWorkshopCar]))
+  await addCar(qi, t, story, second.workshopId, secondWorkshopCar, platformIds, null, second.people['admin@second.voltwright.test']!)
 }
 
 // Demo data is removed with the database; audit events cannot be deleted by design.
-export const down: MigrationFn<QueryInterface> = async () => {
+export const down: MigrationFn<SeedContext> = async () => {
   throw new Error('The demo workshop cannot be un-seeded: its history is append-only. Drop the database instead.')
 }

@@ -24,12 +24,12 @@ export const demoKits: DemoKit[] = [
     ],
     cars: [
       {
-        car: { stockRef: 'OF-107', make: 'Penhallow', model: 'Kestrel Roadster', year: 1964, chassisNumber: 'PM64-05120', registration: 'HWP 208B', status: 'road-testing' },
+        car: { stockRef: 'OF-107', make: 'Penhallow', model: 'Kestrel Roadster', year: 1964, chassisNumber: 'PM64-05120', registration: 'HWP 208B', intakeDaysAgo: 25, status: 'road-testing' },
         spec: { kerbMassKg: 915, cgHeightMm: 465 }, onBaselineNo: 1,
         versions: [{ author: tuner, daysAgo: 20, state: 'approved', parameters: { ...roadster, powerCapKw: 40, speedLimitKph: 110 }, rationale: 'From the kit baseline; 40 kW and 110 km/h for this car\'s original cross-ply-era wheels.', review: { by: lead, decision: 'approve', comment: 'Fine for the road test.' } }]
       },
       {
-        car: { stockRef: 'OF-108', make: 'Harrowby', model: 'Tamsin 1300 Saloon', year: 1969, chassisNumber: 'HT69-31877', registration: 'FLK 640G', status: 'converting' },
+        car: { stockRef: 'OF-108', make: 'Harrowby', model: 'Tamsin 1300 Saloon', year: 1969, chassisNumber: 'HT69-31877', registration: 'FLK 640G', intakeDaysAgo: 3, status: 'converting' },
         spec: { kerbMassKg: 1005, frontAxleLoadPct: 54, wheelbaseMm: 2440, cgHeightMm: 520, tyreSize: '165/80 R13 83T', originalEnginePowerKw: 43 }, onBaselineNo: 2,
         versions: [{ author: tuner, daysAgo: 3, state: 'draft', parameters: { ...roadster, liftOffRegenPct: 20, creepTorqueNm: 20, torqueCapNm: 140 }, rationale: 'From the kit baseline; a little less torque for the saloon\'s older half-shafts.' }]
       }
@@ -44,7 +44,7 @@ export const demoKits: DemoKit[] = [
     ],
     cars: [
       {
-        car: { stockRef: 'OF-109', make: 'Velling', model: 'Arden Estate', year: 1973, chassisNumber: 'VA73-24406', registration: 'NRT 771L', status: 'intake' },
+        car: { stockRef: 'OF-109', make: 'Velling', model: 'Arden Estate', year: 1973, chassisNumber: 'VA73-24406', registration: 'NRT 771L', intakeDaysAgo: 10, status: 'intake' },
         spec: { kerbMassKg: 1365, payloadKg: 250 }, onBaselineNo: 1,
         versions: [{ author: tuner, daysAgo: 2, state: 'draft', parameters: { powerCapKw: 70, torqueCapNm: 220, regenTorqueLimitNm: 90, liftOffRegenPct: 15, speedLimitKph: 130 }, rationale: 'From the kit baseline; less lift-off regen as the owner tows a small trailer.' }]
       }

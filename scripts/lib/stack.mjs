@@ -30,7 +30,9 @@ export async function bringUp(config, options = {}) {
   const mailSink = startMailSink(config, { critical })
   const objectStore = startObjectStore(config, { critical })
   await step('build', ensureBuild)
-  const server = startChild('server', process.execPath, [join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
+  // SERVER_NODE_ARGS adds Node options to the server alone, e.g. `--cpu-prof --cpu-prof-dir=/tmp/prof` for a profile.
+  const nodeArgs = (process.env.SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean)
+  const server = startChild('server', process.execPath, [...nodeArgs, join(root, '.output', 'server', 'index.mjs')], { env, cwd: root })
   await waitForHttp(`${config.baseUrl}/api/health`)
   return { env, pgDir, mailSink, objectStore, server }
 }

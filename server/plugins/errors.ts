@@ -1,3 +1,4 @@
+import { STATUS_CODES } from 'node:http'
 import type { H3Error, H3Event } from 'h3'
 
 const UNREACHABLE = new Set([
@@ -41,6 +42,8 @@ export default defineNitroPlugin((nitroApp) => {
   nitroApp.h3App.options.onError = (error: H3Error, event) => {
     if (storeUnreachable(error as Cause)) unavailable(error, event, 'The file store cannot be reached just now. Nothing was stored; please try again in a moment.')
     else if (databaseUnreachable(error as Cause)) unavailable(error, event, 'The database cannot be reached just now. Nothing was changed; please try again in a moment.')
+    // A refusal made with a status alone reads as its own reason ("401 Unauthorized"), not "Server Error".
+    else if (!error.statusMessage && error.statusCode < 500) error.statusMessage = STATUS_CODES[error.statusCode] ?? ''
     return handle?.(error, event)
   }
 })

@@ -20,37 +20,36 @@ const ajv = (): Ajv2020 => (shared ??= createAjv())
 // The most recently used validators, at most MAX_VALIDATORS of them, so that a workshop uploading schema after
 // schema cannot grow the server's memory without end; the least recently used is dropped, and ajv's own copy with it.
 export const MAX_VALIDATORS = 256
-const validators = new Map<string, { validate: ValidateFunction, schema: object }>()
+// Keyed by the platform's key and its schema's JSON text, so an edited schema under the same key is compiled
+// anew; a schema the keyword allow-list refuses is kept as refused, so neither check runs twice per schema.
+const validators = new Map<string, { validate: ValidateFunction | null, schema: object | null }>()
 export const cachedValidatorCount = () => validators.size
-
-// FNV-1a over the schema's JSON: cheap, and enough to notice an edited schema under the same key.
-function hash(text: string): string {
-  let h = 0x811c9dc5
-  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193)
-  return (h >>> 0).toString(16)
-}
 
 // A validator for a platform's parameters, compiled once per platform key and schema; none for a schema
 // stored before the keyword allow-list that it now refuses (ajv never compiles a user's regular expression).
 export function compileParameterValidator(platform: PlatformLike): ValidateFunction | null {
-  if (refusedKeywords(platform.schema).length) return null
-  const key = `${platform.key}:${hash(JSON.stringify(platform.schema))}`
+  const key = `${platform.key}\n${JSON.stringify(platform.schema)}`
   const cached = validators.get(key)
   if (cached) {
     validators.delete(key)
     validators.set(key, cached)
     return cached.validate
   }
-  // Without $id, so an edited schema under the same id does not clash with the one compiled before.
-  const { $id: _id, ...schema } = platform.schema as Record<string, unknown>
-  const validate = ajv().compile(schema)
-  validators.set(key, { validate, schema })
+  const entry = compileEntry(platform.schema)
+  validators.set(key, entry)
   if (validators.size > MAX_VALIDATORS) {
-    const [oldest, entry] = validators.entries().next().value!
+    const [oldest, dropped] = validators.entries().next().value!
     validators.delete(oldest)
-    ajv().removeSchema(entry.schema)
+    if (dropped.schema) ajv().removeSchema(dropped.schema)
   }
-  return validate
+  return entry.validate
+}
+
+function compileEntry(stored: unknown): { validate: ValidateFunction | null, schema: object | null } {
+  if (refusedKeywords(stored).length) return { validate: null, schema: null }
+  // Without $id, so an edited schema under the same id does not clash with the one compiled before.
+  const { $id: _id, ...schema } = stored as Record<string, unknown>
+  return { validate: ajv().compile(schema), schema }
 }
 
 export function describeAjvErrors(errors: ErrorObject[] | null | undefined): string[] {

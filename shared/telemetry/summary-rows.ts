@@ -1,8 +1,9 @@
 // A log's summary as the tester reads it: one row per figure, rounded, with its unit.
 import { kwToHp } from '../compute/units'
 import type { TelemetrySummary } from './summary'
+import { localeNumber } from '../utils/number-format'
 
-const f = (x: number | null | undefined, d = 1) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: d, minimumFractionDigits: d }))
+const f = (x: number | null | undefined, d = 1) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : localeNumber(x, { maximumFractionDigits: d, minimumFractionDigits: d }))
 const withUnit = (x: number | null | undefined, d: number, unit: string) => (x === null || x === undefined ? '—' : `${f(x, d)} ${unit}`)
 
 export function summaryRows(s: Partial<TelemetrySummary>): { label: string, value: string }[] {

@@ -14,6 +14,7 @@ import { changeOrder, knownChangeLabel } from './change-labels'
 import { fitsText, type KitFit } from '../schemas/kit'
 import { auditorRows, isAuditorKey } from './audit-auditors'
 import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
+import { localeNumber } from './number-format'
 
 export interface StoryRow { label: string, value: string }
 export interface StoryCheck { title: string, verdict: string, measured: string }
@@ -24,7 +25,7 @@ type Data = Record<string, unknown>
 const str = (x: unknown) => (typeof x === 'string' ? x : undefined)
 const num = (x: unknown) => (typeof x === 'number' && Number.isFinite(x) ? x : undefined)
 const obj = (x: unknown): Data => (x && typeof x === 'object' && !Array.isArray(x) ? x as Data : {})
-const plural = (n: number, one: string, many = `${one}s`) => `${n.toLocaleString('en-GB')} ${n === 1 ? one : many}`
+const plural = (n: number, one: string, many = `${one}s`) => `${localeNumber(n)} ${n === 1 ? one : many}`
 
 function versionName(e: HistoryEntry, d: Data): string {
   if (e.names.version) return e.names.version

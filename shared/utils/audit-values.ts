@@ -5,6 +5,7 @@ import { snagKindLabels, snagPriorityLabels, snagStatusLabels } from '../schemas
 import { checkVerdictLabels, surfaceLabels } from '../schemas/road-test'
 import { roleLabels } from '../schemas/roles'
 import { formatDateTime, isIsoMoment } from './dates'
+import { localeNumber } from './number-format'
 
 // A field's unit from the end of its name ("ambientC" is in °C), with the decimals the trade gives it.
 const unitSuffixes: [RegExp, string, number][] = [
@@ -39,7 +40,7 @@ export function numberText(x: number, decimals?: number, upTo = false): string {
   if (!Number.isFinite(x)) return '—'
   const abs = Math.abs(x)
   const d = decimals ?? (Number.isInteger(x) ? 0 : abs >= 10 ? 1 : abs >= 1 ? 2 : 3)
-  return x.toLocaleString('en-GB', { minimumFractionDigits: upTo ? 0 : decimals ?? 0, maximumFractionDigits: d })
+  return localeNumber(x, { minimumFractionDigits: upTo ? 0 : decimals ?? 0, maximumFractionDigits: d })
 }
 
 // "1.20 m/s²" (decelerations keep two figures, as the trade compares them), "134 Wh", "9 °C", "5 %"

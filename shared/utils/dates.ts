@@ -1,5 +1,6 @@
 // One way of writing dates across the screens, the sheets and the exports: the workshop's locale
 // (en-GB unless it says otherwise), the month in letters so "2 Dec 2026" reads the same everywhere.
+import { localeDateParts } from './number-format'
 export const DEFAULT_LOCALE = 'en-GB'
 
 type DateInput = string | number | Date
@@ -14,13 +15,13 @@ export interface DateOptions { locale?: string, timeZone?: string }
 // "2 Dec 2026"
 export function formatDate(x: DateInput | null | undefined, o: DateOptions = {}): string {
   const d = x === null || x === undefined ? null : valid(x)
-  return d ? d.toLocaleDateString(o.locale ?? DEFAULT_LOCALE, { day: 'numeric', month: 'short', year: 'numeric', timeZone: o.timeZone }) : '—'
+  return d ? localeDateParts(d, { day: 'numeric', month: 'short', year: 'numeric', timeZone: o.timeZone }, o.locale ?? DEFAULT_LOCALE) : '—'
 }
 
 // "2 Dec 2026, 14:05"
 export function formatDateTime(x: DateInput | null | undefined, o: DateOptions = {}): string {
   const d = x === null || x === undefined ? null : valid(x)
-  return d ? `${formatDate(d, o)}, ${d.toLocaleTimeString(o.locale ?? DEFAULT_LOCALE, { hour: '2-digit', minute: '2-digit', timeZone: o.timeZone })}` : '—'
+  return d ? `${formatDate(d, o)}, ${localeDateParts(d, { hour: '2-digit', minute: '2-digit', timeZone: o.timeZone }, o.locale ?? DEFAULT_LOCALE)}` : '—'
 }
 
 // An ISO moment or day as the history may hold one in its values.

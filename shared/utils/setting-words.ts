@@ -3,6 +3,7 @@
 // label, a curve a short list of points (docs/computation.md, "Settings").
 import { kphToMph, kwToHp } from '../compute/units'
 import { curveAxes, enumLabels, finite, settingKind, type LooseProperty } from '../compute/setting-kinds'
+import { localeNumber } from './number-format'
 
 const MAX_POINTS_SHOWN = 6
 
@@ -13,7 +14,7 @@ function decimalsOf(p: LooseProperty | undefined): number {
   return Math.min(3, text.includes('.') ? text.split('.')[1]!.length : 0)
 }
 
-const plain = (x: number, digits: number) => x.toLocaleString('en-GB', { maximumFractionDigits: digits, useGrouping: false })
+const plain = (x: number, digits: number) => localeNumber(x, { maximumFractionDigits: digits, useGrouping: false })
 
 export function numberWords(x: number, unit: string | undefined, digits = 2): string {
   if (!Number.isFinite(x)) return '—'

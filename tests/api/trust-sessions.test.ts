@@ -49,6 +49,32 @@ describe('sessions after changes to the person, and the policy on answers', asyn
     expect(read.body.secure).toBeUndefined() // the session epoch stays on the server's side
   })
 
+  // The busy reads check the person in the same round trip as their own query, scoped as the cookie says;
+  // a role changed since sign-in must still decide what they see at once (server/utils/guards/signed-in.ts).
+  it('a tuner made a car owner after signing in reads as an owner at once: car list, history, diff and evaluate', async () => {
+    const p = await newPerson(['tuner'])
+    const s = await signIn(p.email, PASSWORD)
+    const before = await s.call('GET', '/api/vehicles?pageSize=5')
+    expect(before.status).toBe(200)
+    expect(before.body.total).toBeGreaterThan(0)
+    const car = before.body.items[0]
+    const versions = (await s.call('GET', `/api/vehicles/${car.id}/profiles`)).body.items.flatMap((pr: { versions: { id: number }[] }) => pr.versions)
+    expect(versions.length).toBeGreaterThan(0)
+    const diffUrl = `/api/versions/${versions[0].id}/diff/${versions.at(-1).id}`
+    expect((await s.call('GET', diffUrl)).status).toBe(200)
+    expect((await s.call('GET', `/api/vehicles/${car.id}/history?limit=5`)).status).toBe(200)
+    const evaluate = { vehicleId: car.id, platformKey: car.platform.key, parameters: {} }
+    expect((await s.call('POST', '/api/evaluate', evaluate)).status).not.toBe(404)
+
+    expect((await admin.call('PATCH', `/api/users/${p.id}`, { roles: ['client'] })).status).toBe(200)
+    const after = await s.call('GET', '/api/vehicles?pageSize=5')
+    expect(after.status).toBe(200)
+    expect(after.body).toEqual({ items: [], total: 0 }) // a new owner owns no car yet
+    expect((await s.call('GET', `/api/vehicles/${car.id}/history?limit=5`)).status).toBe(404)
+    expect((await s.call('GET', diffUrl)).status).toBe(403)
+    expect((await s.call('POST', '/api/evaluate', evaluate)).status).toBe(404)
+  })
+
   it('gives a new session id at every sign-in, even when the request brings a session cookie', async () => {
     const p = await newPerson()
     const first = await signIn(p.email, PASSWORD)
@@ -72,8 +98,15 @@ describe('sessions after changes to the person, and the policy on answers', asyn
     // An error answer carries the server's own error policy, which allows no script either.
     const refused = await anonymous.call('GET', '/api/auth/me')
     expect(refused.status).toBe(401)
+    expect(refused.body.statusMessage).toBe('Unauthorized') // its own reason, not "Server Error"
     expect(refused.headers.get('content-security-policy') ?? '').not.toContain('{{nonce}}')
     expect(refused.headers.get('content-security-policy') ?? '').toMatch(/(script|default)-src 'none'/)
+    // A page that sends a signed-out visitor to sign in is an answer without a page.
+    for (const path of ['/cars', '/robots.txt', '/no-such-page']) {
+      const moved = await anonymous.call('GET', path, undefined, { accept: 'text/html' })
+      expect(moved.status).toBe(302)
+      expect(moved.headers.get('content-security-policy')).toBe('default-src \'none\'; frame-ancestors \'none\'')
+    }
   })
 
   it('pages keep their content security policy, with a real nonce', async () => {

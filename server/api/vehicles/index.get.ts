@@ -2,6 +2,5 @@ import { vehicleListQuerySchema } from '../../../shared/schemas/vehicle'
 
 export default defineEventHandler(async (event) => {
   const query = await getValidatedQuery(event, zodValidator(vehicleListQuerySchema))
-  const user = await requireUser(event)
-  return listVehicles(user, query)
+  return listVehicles(event, query)
 })

@@ -1,9 +1,11 @@
+import type { H3Event } from 'h3'
 import { Platform, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import type { VehicleCreate, VehicleListQuery, VehicleUpdate, VehicleView } from '../../../shared/schemas/vehicle'
 import { jsonPatch } from '../../../shared/utils/json-patch'
 import { selectRows, useDatabase } from '../database/db'
 import { vehicleScopeSql } from '../guards/guards'
+import { signedInRead } from '../guards/signed-in'
 import { appendAuditEvent } from '../history/audit'
 import { findWorkshopPlatform } from '../platforms/platforms'
 
@@ -23,19 +25,30 @@ export const vehicleInclude = [{ model: Platform, as: 'platform' }, { model: Use
 
 // One plain query for the page and its count (the list is the busiest read): of the drive unit only what the
 // list shows, not its schema. Sort fields come from the schema's own list, so they are safe to name in SQL.
-export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
-  const where = [vehicleScopeSql(user, 'v')]
-  const replacements: Record<string, unknown> = { workshopId: user.workshopId, userId: user.id, limit: q.pageSize, offset: (q.page - 1) * q.pageSize }
-  if (q.status) { where.push('v.status = :status'); replacements.status = q.status }
-  if (q.q) {
-    where.push(`(${['make', 'model', '"stockRef"', 'registration'].map(f => `v.${f} ILIKE :like`).join(' OR ')})`)
-    replacements.like = `%${q.q.replace(/[\\%_]/g, m => `\\${m}`)}%`
+export async function listVehicles(event: H3Event, q: VehicleListQuery) {
+  const order = (t: string) => `${t}."${q.sort}" ${q.dir === 'desc' ? 'DESC' : 'ASC'}, ${t}.id ASC`
+  const filter = (user: SignedIn) => {
+    const where = [vehicleScopeSql(user, 'v')]
+    const replacements: Record<string, unknown> = { workshopId: user.workshopId, userId: user.id }
+    if (q.status) { where.push('v.status = :status'); replacements.status = q.status }
+    if (q.q) {
+      where.push(`(${['make', 'model', '"stockRef"', 'registration'].map(f => `v.${f} ILIKE :like`).join(' OR ')})`)
+      replacements.like = `%${q.q.replace(/[\\%_]/g, m => `\\${m}`)}%`
+    }
+    return { where: where.join(' AND '), replacements }
   }
-  const rows = await selectRows<ListRow>(
-    `SELECT v.*, pl.key AS "platformKey", pl.name AS "platformName", o.name AS "ownerName", count(*) OVER () AS total
-       FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" LEFT JOIN users o ON o.id = v."ownerUserId"
-      WHERE ${where.join(' AND ')} ORDER BY v."${q.sort}" ${q.dir === 'desc' ? 'DESC' : 'ASC'}, v.id ASC LIMIT :limit OFFSET :offset`, replacements)
-  const total = rows.length ? Number(rows[0]!.total) : q.page === 1 ? 0 : await countVehicles(where.join(' AND '), replacements)
+  // The page and the person's sign-in check in one round trip (guards/signed-in.ts).
+  const { user, rows } = await signedInRead<ListRow>(event, (u) => {
+    const { where, replacements } = filter(u)
+    return {
+      sql: `SELECT v.*, pl.key AS "platformKey", pl.name AS "platformName", o.name AS "ownerName", count(*) OVER () AS total
+              FROM vehicles v LEFT JOIN platforms pl ON pl.id = v."platformId" LEFT JOIN users o ON o.id = v."ownerUserId"
+             WHERE ${where} ORDER BY ${order('v')} LIMIT :limit OFFSET :offset`,
+      replacements: { ...replacements, limit: q.pageSize, offset: (q.page - 1) * q.pageSize },
+      orderBy: order('r')
+    }
+  })
+  const total = rows.length ? Number(rows[0]!.total) : q.page === 1 ? 0 : await countVehicles(filter(user))
   const items = rows.map(r => vehicleView({
     ...r, platform: r.platformKey ? { key: r.platformKey, name: r.platformName } : undefined,
     owner: r.ownerUserId ? { id: r.ownerUserId, name: r.ownerName } : undefined
@@ -46,7 +59,7 @@ export async function listVehicles(user: SignedIn, q: VehicleListQuery) {
 type ListRow = Vehicle & { platformKey: string | null, platformName: string, ownerName: string, total: string }
 
 // A page past the end still reports how many cars there are.
-async function countVehicles(where: string, replacements: Record<string, unknown>) {
+async function countVehicles({ where, replacements }: { where: string, replacements: Record<string, unknown> }) {
   const [row] = await selectRows<{ n: string }>(`SELECT count(*) AS n FROM vehicles v WHERE ${where}`, replacements)
   return Number(row!.n)
 }

@@ -13,11 +13,12 @@ import type { TelemetrySummary } from '../../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './words'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { recordedVersionActors } from '../history/recorded-names'
+import { localeNumber } from '../../../shared/utils/number-format'
 
 // A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.
 function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
   const def = list.find(d => d.key === c.key)
-  const value = def && typeof c.values?.value === 'number' ? `${c.values.value.toLocaleString('en-GB', { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
+  const value = def && typeof c.values?.value === 'number' ? `${localeNumber(c.values.value, { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
   return {
     label: def?.label ?? checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict,
     measured: def ? value : measuredValues(c.key, c.values).join(', ') || '—', note: c.note
@@ -26,12 +27,12 @@ function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
 
 function logLines(s: TelemetrySummary | undefined) {
   if (!s) return []
-  const f = (x: number | null, d = 1) => x === null ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: d })
+  const f = (x: number | null, d = 1) => x === null ? '—' : localeNumber(x, { maximumFractionDigits: d })
   return [
-    { label: 'Logged', value: `${s.samples.toLocaleString('en-GB')} samples over ${f(s.durationS / 60, 1)} min` },
+    { label: 'Logged', value: `${localeNumber(s.samples)} samples over ${f(s.durationS / 60, 1)} min` },
     { label: 'Peak speed', value: `${f(s.peakSpeedKph, 0)} km/h` },
     { label: 'Peak battery power', value: `${f(s.peakPowerKw, 1)} kW` },
-    { label: 'Strongest lift-off slowing', value: `${s.peakLiftOffDecelMs2 === null ? '—' : s.peakLiftOffDecelMs2.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²` },
+    { label: 'Strongest lift-off slowing', value: `${s.peakLiftOffDecelMs2 === null ? '—' : localeNumber(s.peakLiftOffDecelMs2, { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²` },
     { label: 'Roll-back on the hill start', value: `${f(s.maxRollbackM * 1000, 0)} mm` },
     { label: 'Peak temperatures', value: `motor ${f(s.peakMotorC, 0)} °C, inverter ${f(s.peakInverterC, 0)} °C, battery ${f(s.peakBatteryC, 0)} °C` },
     { label: 'Energy', value: `${f(s.energyOutWh / 1000, 2)} kWh used, ${f(s.energyRegenWh / 1000, 2)} kWh recovered by regen` }

@@ -3,10 +3,11 @@ import { kphToMph, kwToHp, ROLES, roleSettings, schemaProperties, type Evaluatio
 import { settingLabel, settingValueWords } from '../../../shared/utils/setting-words'
 import type { HandoverLine } from '../../../shared/schemas/handover'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
+import { localeNumber } from '../../../shared/utils/number-format'
 
-const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toLocaleString('en-GB', { maximumFractionDigits: digits })
+const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : localeNumber(x, { maximumFractionDigits: digits })
 // Decelerations keep two decimals, as the trade compares them (0.50 m/s² against a 0.70 m/s² threshold).
-const ms2 = (x: number) => `${x.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²`
+const ms2 = (x: number) => `${localeNumber(x, { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²`
 const kw = (x: number) => `${n(x, 1)} kW (${n(kwToHp(x))} hp)`
 const kph = (x: number | null) => x === null ? '—' : `${n(x)} km/h (${n(kphToMph(x))} mph)`
 

@@ -82,6 +82,18 @@ export async function appendAuditEvent(t: Transaction, input: AuditInput): Promi
 // read of the chain head and one insert however many (the fleet re-check writes a hundred at a time). The
 // advisory lock serialises writers on the chain head, so concurrent changes never fork it.
 export async function appendAuditEvents(t: Transaction, workshopId: number, inputs: AuditInput[]): Promise<AuditRow[]> {
+  return writeEvents(t, workshopId, inputs)
+}
+
+// For the demo seed only (seeders/demo-story.ts): events dated when the things they record happened, so the
+// demo's history reads as its story. Nothing an API caller sends reaches this. The dates must run from the
+// chain's newest event up to now, in order, so nothing can be slipped in behind events already written.
+export async function appendDatedAuditEvents(t: Transaction, workshopId: number, inputs: (AuditInput & { at: Date })[]): Promise<AuditRow[]> {
+  return writeEvents(t, workshopId, inputs, inputs.map(i => new Date(i.at)))
+}
+
+// Without dates, the events are stamped now, once the chain is locked: later in the chain is never earlier in time.
+async function writeEvents(t: Transaction, workshopId: number, inputs: AuditInput[], dates?: Date[]): Promise<AuditRow[]> {
   if (!inputs.length) return []
   if (inputs.some(i => i.workshopId !== workshopId)) throw new Error('appendAuditEvents: one workshop\'s chain at a time')
   const sequelize = (t as unknown as { sequelize: Sequelize }).sequelize
@@ -92,12 +104,13 @@ export async function appendAuditEvents(t: Transaction, workshopId: number, inpu
   ])
   const byId = new Map(people.map(p => [p.id, p]))
   for (const id of actorIds) if (!byId.has(id)) throw new Error(`appendAuditEvent: no person ${id}`)
-  const [head] = await sequelize.query<{ hash: string }>(
-    'SELECT hash FROM audit_events WHERE "workshopId" = :w ORDER BY id DESC LIMIT 1',
+  const [head] = await sequelize.query<{ hash: string, createdAt: Date }>(
+    'SELECT hash, "createdAt" FROM audit_events WHERE "workshopId" = :w ORDER BY id DESC LIMIT 1',
     { replacements: { w: workshopId }, type: QueryTypes.SELECT, transaction: t })
+  if (dates) requireInOrder(dates, head ? new Date(head.createdAt) : null)
+  const now = new Date()
   let prevHash = head?.hash ?? null
-  const createdAt = new Date()
-  const rows = inputs.map((input) => {
+  const rows = inputs.map((input, n) => {
     const actorId = input.actorId ?? null
     const person = actorId === null ? undefined : byId.get(actorId)
     const row: Hashed = {
@@ -105,7 +118,7 @@ export async function appendAuditEvents(t: Transaction, workshopId: number, inpu
       actor: person ? { name: person.name, email: person.email } : null,
       action: input.action, entityType: input.entityType, entityId: String(input.entityId),
       // Hashed as PostgreSQL will give it back: plain JSON, no undefined, no Dates.
-      data: JSON.parse(JSON.stringify(input.data ?? {})), createdAt, prevHash
+      data: JSON.parse(JSON.stringify(input.data ?? {})), createdAt: dates?.[n] ?? now, prevHash
     }
     const hash = eventHash(row)
     prevHash = hash
@@ -125,4 +138,17 @@ export async function appendAuditEvents(t: Transaction, workshopId: number, inpu
     if (id === undefined) throw new Error('appendAuditEvents: an event was not written')
     return { ...row, id }
   })
+}
+
+// A dated event may not fall before the chain's newest event, before the one it follows, or in the future.
+function requireInOrder(dates: Date[], after: Date | null) {
+  const now = Date.now()
+  let previous = after?.getTime() ?? -Infinity
+  for (const at of dates) {
+    const time = at.getTime()
+    if (!Number.isFinite(time) || time < previous || time > now) {
+      throw new Error(`appendDatedAuditEvents: ${String(at)} is not between the chain's newest event and now, in order`)
+    }
+    previous = time
+  }
 }

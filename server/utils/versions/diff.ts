@@ -1,4 +1,6 @@
-import type { SignedIn } from '../guards/guards'
+import type { H3Event } from 'h3'
+import { assertPermission } from '../guards/guards'
+import { signedInRead } from '../guards/signed-in'
 import { schemaProperties, type SettingValues } from '../../../shared/compute/parameter-input'
 import type { Evaluation, PlatformLike } from '../../../shared/compute/types'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
@@ -8,7 +10,6 @@ import { canonicalJson } from '../../../shared/utils/canonical-json'
 import { jsonPatch } from '../../../shared/utils/json-patch'
 import { settingLabel, settingValueWords } from '../../../shared/utils/setting-words'
 import type { ParameterDiffRow, VersionDiff, VersionSide } from '../../../shared/schemas/profile-views'
-import { selectRows } from '../database/db'
 import { settingsOf, evaluateOnServer } from '../platforms/evaluation'
 import { figureDiff, numericChange, warningDiff } from './diff-figures'
 
@@ -18,14 +19,18 @@ interface PairRow {
 }
 
 // Both versions with their car, drive unit and workshop settings in one plain query (the diff is on the
-// engineer's hot path; nested model includes cost more than the two evaluations).
-async function loadPair(user: SignedIn, aId: number, bId: number) {
-  const rows = await selectRows<PairRow>(
-    `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", k.id AS "kitId", COALESCE(v.spec, k."specTemplate") AS spec,
+// engineer's hot path; nested model includes cost more than the two evaluations), in the same round trip as
+// the sign-in check (guards/signed-in.ts); for staff only.
+async function loadPair(event: H3Event, aId: number, bId: number) {
+  const { user, rows } = await signedInRead<PairRow>(event, u => ({
+    sql: `SELECT pv.id, pv."versionNo", pv.state, pv.parameters, p.name AS "profileName", v.id AS "vehicleId", k.id AS "kitId", COALESCE(v.spec, k."specTemplate") AS spec,
             pl.key AS "platformKey", pl.name AS "platformName", pl."motorMaxRpm", pl."torqueConstantNmPerA", pl.schema, w.settings
        FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId" LEFT JOIN vehicles v ON v.id = p."vehicleId" LEFT JOIN kits k ON k.id = p."kitId"
        JOIN platforms pl ON pl.id = COALESCE(v."platformId", k."platformId") JOIN workshops w ON w.id = pv."workshopId"
-      WHERE pv.id = ANY(:ids::int[]) AND pv."workshopId" = :workshopId`, { ids: [aId, bId], workshopId: user.workshopId })
+      WHERE pv.id = ANY(:ids::int[]) AND pv."workshopId" = :workshopId`,
+    replacements: { ids: [aId, bId], workshopId: u.workshopId }
+  }))
+  assertPermission(user, 'staff')
   const pick = (id: number) => {
     const row = rows.find(r => r.id === id)
     if (!row) throw createError({ statusCode: 404, message: 'No such version in this workshop.' })
@@ -76,8 +81,8 @@ const side = (r: PairRow, e: Evaluation): VersionSide =>
   ({ versionId: r.id, label: `${r.profileName} v${r.versionNo}`, valid: e.valid, errors: e.errors, warnings: e.warnings, figures: e.figures, curves: e.curves })
 
 // What changed from version a to version b, and what that does to the car: both evaluated now, on their cars.
-export async function diffVersions(user: SignedIn, aId: number, bId: number): Promise<VersionDiff> {
-  const { a, b, settings } = await loadPair(user, aId, bId)
+export async function diffVersions(event: H3Event, aId: number, bId: number): Promise<VersionDiff> {
+  const { a, b, settings } = await loadPair(event, aId, bId)
   const ea = evaluateOnServer(a.spec, platformOf(a), a.parameters, settings)
   const eb = aId === bId ? ea : evaluateOnServer(b.spec, platformOf(b), b.parameters, settings)
   return {
