@@ -94,8 +94,10 @@ function fingerprints(w: SheetWriter, s: HandoverSheet) {
     for (const person of p.people) {
       if (!person.hash || seen.has(person.hash)) continue
       seen.add(person.hash)
-      w.ensure(24)
-      w.row(`“${p.profileName}” v${p.versionNo}, ${person.hashLabel}`, person.hash, undefined, 200)
+      w.ensure(28)
+      w.text(`“${p.profileName}”, version ${p.versionNo}: ${person.hashLabel}`, { size: 8.5, color: ink.soft })
+      w.text(person.hash, { size: 8.5 })
+      w.doc.y += 3
     }
   }
 }
