@@ -29,6 +29,7 @@ export interface HandoverSheet {
   profiles: HandoverProfile[]
   enhancements: { title: string, detail: string, priority: string }[]
   cautions: string[]
+  notice: string | null // the controller was found drifted: said before anything else
 }
 
 // Which wheels regen brakes, in the owner's words, by the car's driven axle.
@@ -40,6 +41,11 @@ const regenAxle: Record<'front' | 'rear' | 'all', string> = {
 
 export function handoverCautions(drivenAxle: 'front' | 'rear' | 'all'): string[] {
   return HANDOVER_CAUTIONS.map(c => c.startsWith('Regenerative braking') ? `Regenerative braking slows the car when you lift off the accelerator. ${regenAxle[drivenAxle]}` : c)
+}
+
+// Put at the top of the sheet when a read-back last found the controller holding other settings (drift).
+export function driftNotice(foundOn: string): string {
+  return `On ${foundOn} the controller was found holding settings other than those on this sheet. Until the workshop has put the signed-off settings back and read them back, do not rely on this sheet: the car may pull, slow and hold differently, and should not be driven before a qualified engineer has checked it.`
 }
 
 export const HANDOVER_CAUTIONS = [

@@ -13,6 +13,9 @@ export const kitFitSchema = z.object({ make: text('Make'), model: text('Model'),
   .refine(f => f.yearFrom <= f.yearTo, { message: 'The first year comes before the last', path: ['yearTo'] })
 export type KitFit = z.output<typeof kitFitSchema>
 
+// "Velling Arden Estate (1967–1978); Penhallow Marten Roadster (1962)"
+export const fitsText = (fits: KitFit[]) => fits.map(f => `${f.make} ${f.model} (${f.yearFrom === f.yearTo ? f.yearFrom : `${f.yearFrom}–${f.yearTo}`})`).join('; ')
+
 const kitFields = {
   name: text('A name'),
   fits: z.array(kitFitSchema).max(50, 'At most 50 lines'),

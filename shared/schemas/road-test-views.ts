@@ -34,7 +34,7 @@ export interface RoadTestListItem {
 
 // Measured beside predicted: the model's figures for the tested version against the log and the checks.
 export interface ModelComparison {
-  liftOffDecel: { predictedMs2: number | null, measuredMs2: number | null, gripLimitMs2: number | null }
+  liftOffDecel: { predictedMs2: number | null, measuredMs2: number | null, gripLimitMs2: number | null, drivenAxle: 'front' | 'rear' | 'all' }
   startGrade: { predictedMaxPct: number | null, testedPct: number | null, limitedBy: string | null }
   rollback: { measuredM: number | null, reportedMm: number | null }
   topSpeed: { predictedKph: number | null, measuredKph: number | null }

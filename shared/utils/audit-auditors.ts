@@ -11,7 +11,8 @@ const idLabels: Record<string, string> = {
   versionId: 'Version record', profileId: 'Profile record', roadTestId: 'Road test record', reviewId: 'Review record',
   parentVersionId: 'Drafted from version record', supersededVersionId: 'Replaced version record', attachmentId: 'File record',
   telemetryLogId: 'Controller log record', contentHash: 'Settings hash at this step', versionContentHash: 'Version\'s settings hash',
-  sha256: 'File SHA-256', lockVersion: 'Save number', because: 'Because of', kitId: 'Kit record', baselineVersionId: 'Kit baseline version record'
+  kitId: 'Kit record', baselineVersionId: 'Kit baseline version record',
+  sha256: 'File SHA-256', lockVersion: 'Save number', because: 'Because of'
 }
 
 export function auditorRows(e: HistoryEntry): { label: string, value: string }[] {

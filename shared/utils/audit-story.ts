@@ -3,13 +3,15 @@
 // record numbers and hashes. Nothing in the main text is a field name, a code or raw JSON (docs/history.md).
 import type { HistoryEntry } from '../schemas/history'
 import { ruleTitles } from '../compute/rule-titles'
-import { checkGuides, checkTitles } from '../schemas/road-test-checks'
+import { checkTitles } from '../schemas/road-test-checks'
+import { measuredValues } from './check-measures'
 import type { CheckKey } from '../schemas/road-test'
 import { summaryRows } from '../telemetry/summary-rows'
 import { findPlatform } from '../platforms'
 import { changePathLabel } from './audit-actions'
 import { bytesText, keyLabel, numberText, stageWords, unitOf, valueText, wordsOf } from './audit-values'
 import { knownChangeLabel, knownChangeRank } from './change-labels'
+import { fitsText, type KitFit } from '../schemas/kit'
 import { auditorRows, isAuditorKey } from './audit-auditors'
 import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
 import { localeNumber } from './number-format'
@@ -108,7 +110,8 @@ function warningsText(list: Data[]): string {
   return [...byRule].map(([rule, severities]) => {
     const counts = [...new Set(severities)].map((s) => {
       const n = severities.filter(x => x === s).length
-      return n > 1 ? `${n} × ${s}` : s
+      const word = s === 'info' ? 'note' : s
+      return n > 1 ? `${n} × ${word}` : word
     })
     return `${ruleTitles[rule as keyof typeof ruleTitles]?.title ?? wordsOf(rule)} (${counts.join(', ')})`
   }).join('; ')
@@ -155,28 +158,12 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
   return facts
 }
 
-// A measured value by the check's own field: "Roll-back 40 mm", "0–50 km/h 4.1 s", "Feel firm".
-function measuredText(key: CheckKey, name: string, v: unknown): string {
-  const field = checkGuides.find(g => g.key === key)?.fields.find(f => f.name === name)
-  if (!field || typeof v !== 'number') return `${keyLabel(name).replace(/, .*$/, '')} ${valueText(v, name)}`
-  const text = field.unit === 'm/s²' ? numberText(v, 2) : localeNumber(v, { maximumFractionDigits: field.step < 1 ? 1 : 0 })
-  return `${field.label.replace(/, if measured$/, '')} ${text} ${field.unit}`
-}
-
-// A check's measured values in the order its guide asks for them (the database keeps keys in its own order).
-function fieldRank(key: CheckKey, name: string): number {
-  const i = checkGuides.find(g => g.key === key)?.fields.findIndex(f => f.name === name) ?? -1
-  return i < 0 ? Number.MAX_SAFE_INTEGER : i
-}
-
 function checksOf(d: Data): StoryCheck[] {
   if (!Array.isArray(d.checks)) return []
   return d.checks.map((c: Data) => ({
     title: checkTitles[c.key as CheckKey] ?? wordsOf(String(c.key)),
     verdict: valueText(c.verdict, 'verdict'),
-    measured: Object.entries(obj(c.values)).filter(([, v]) => v !== null && v !== undefined)
-      .sort(([a], [b]) => fieldRank(c.key as CheckKey, a) - fieldRank(c.key as CheckKey, b))
-      .map(([k, v]) => measuredText(c.key as CheckKey, k, v)).join(', ')
+    measured: measuredValues(String(c.key), obj(c.values)).join(', ')
   }))
 }
 
@@ -194,13 +181,16 @@ function platformSettings(e: HistoryEntry): StoryRow[] {
 export function eventStory(e: HistoryEntry): EventStory {
   const d: Data = { ...e.details, after: createdState(e) }
   const people = e.names.people
+  const checkUnit = str(obj(d.after).unit) ?? str(e.changes.find(c => c.path === '/unit')?.after)
   const created = /\.created$/.test(e.action) && e.changes.length > 0 && e.changes.every(c => c.op === 'add' && c.before === undefined)
   const changeValue = (v: unknown, path: string) => {
     const key = path.split('/').pop() ?? ''
     if ((key === 'assigneeId' || key === 'ownerUserId') && v !== null && v !== undefined) return people[String(v)] ?? 'someone no longer listed'
     if (key === 'platformKey' && typeof v === 'string') return findPlatform(v)?.name ?? v
-    if (key === 'fits' && Array.isArray(v)) return v.map(obj).map(f => `${str(f.make) ?? ''} ${str(f.model) ?? ''} (${f.yearFrom ?? '…'}–${f.yearTo ?? '…'})`.trim()).join('; ') || 'none'
-    if (key === 'platformKeys' && Array.isArray(v)) return v.length ? v.map(k => findPlatform(String(k))?.name ?? String(k)).join(', ') : 'none'
+    if (key === 'platformKeys' && (Array.isArray(v) || v === null)) return v?.length ? v.map(k => findPlatform(String(k))?.name ?? String(k)).join(', ') : 'every drive unit'
+    if (key === 'fits' && Array.isArray(v)) return v.length ? fitsText(v as KitFit[]) : 'no cars listed'
+    // A road-test check's limits in the check's own unit.
+    if (e.entityType === 'workshop-check' && (key === 'min' || key === 'max') && typeof v === 'number') return `${numberText(v)}${checkUnit ? ` ${checkUnit}` : ''}`
     // The unit goes with the value unless the field's label already names it ("Power cap, kW").
     const label = knownChangeLabel(e.entityType, path)
     return valueText(v, label && /, \S+$/.test(label) && unitOf(key) ? '' : key)
@@ -209,8 +199,7 @@ export function eventStory(e: HistoryEntry): EventStory {
     sentence: `${sentenceOf(e, d)}.`,
     facts: [...factsOf(e, d), ...(e.action === 'platform.created' ? platformSettings(e) : [])],
     checks: checksOf(d),
-    // A new record's empty fields (a pass-or-fail check's unit and limits) say nothing: left out.
-    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path) && !(created && (c.after === null || c.after === '')))
+    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path) && !(created && unsetCheckLimit(e, c.path, c.after)))
       .sort((a, b) => knownChangeRank(e.entityType, a.path) - knownChangeRank(e.entityType, b.path)).map(c => ({
       label: changePathLabel(c.path, e.entityType),
       before: c.beforeKnown ? changeValue(c.before, c.path) : null,
@@ -221,6 +210,9 @@ export function eventStory(e: HistoryEntry): EventStory {
     auditors: [...auditorRows(e), ...e.changes.filter(c => codePath(e, c.path) && c.op !== 'remove').map(c => ({ label: 'Short code', value: String(c.after) }))]
   }
 }
+
+// A pass-or-fail check is created with no limits or unit: nothing to say about them.
+const unsetCheckLimit = (e: HistoryEntry, path: string, v: unknown) => e.entityType === 'workshop-check' && ['/min', '/max', '/unit'].includes(path) && v === null
 
 // A drive unit's or a check's short code is how the software knows it, not how people name it: for auditors only.
 const codePath = (e: HistoryEntry, path: string) => path === '/key' && (e.entityType === 'platform' || e.entityType === 'workshop-check')

@@ -46,6 +46,7 @@ export function numberText(x: number, decimals?: number, upTo = false): string {
 // "1.20 m/s²" (decelerations keep two figures, as the trade compares them), "134 Wh", "9 °C", "5 %"
 export function measureText(x: number | null | undefined, key: string): string {
   if (x === null || x === undefined) return '—'
+  if (/year/i.test(key) && Number.isInteger(x)) return String(x) // 1967, not 1,967
   const u = unitOf(key)
   return u ? `${numberText(x, u.decimals, u.unit !== 'm/s²')} ${u.unit}` : numberText(x)
 }

@@ -26,15 +26,15 @@ const settingLabels: Record<string, string> = {
 }
 
 const snagLabels: Record<string, string> = {
-  '/kind': 'Kind', '/title': 'Snag', '/detail': 'Detail', '/status': 'Status', '/blocking': 'Blocks sign-off', '/priority': 'Priority', '/assigneeId': 'Assigned to'
+  '/title': 'Snag', '/kind': 'Kind', '/priority': 'Priority', '/status': 'Status', '/blocking': 'Blocks sign-off', '/assigneeId': 'Assigned to', '/detail': 'Detail'
 }
 
 const userLabels: Record<string, string> = { '/name': 'Name', '/email': 'E-mail', '/roles': 'Roles', '/active': 'Can sign in' }
 const platformLabels: Record<string, string> = { '/name': 'Name', '/key': 'Short name', '/motorMaxRpm': 'Highest motor speed, rpm' }
 
 const checkLabels: Record<string, string> = {
-  '/key': 'Short name', '/label': 'Check', '/record': 'Recorded as', '/unit': 'Unit', '/min': 'Lowest allowed',
-  '/max': 'Highest allowed', '/required': 'Required on every road test', '/retired': 'Retired', '/platformKeys': 'Only for drive units (none: every one)'
+  '/label': 'Check', '/record': 'Recorded as', '/min': 'Lowest allowed', '/max': 'Highest allowed', '/unit': 'Unit',
+  '/required': 'Required on every road test', '/platformKeys': 'For drive units', '/retired': 'Retired', '/key': 'Short name'
 }
 
 // A conversion kit: its drive unit, the cars it fits and the typical car its baseline is checked on.

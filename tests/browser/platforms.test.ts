@@ -15,7 +15,7 @@ describe('an admin adds a drive unit', async () => {
     await signInThroughPage(page, 'admin@voltwright.test')
     await page.getByRole('link', { name: 'Drive units' }).click()
     await expect.poll(() => page.locator('[data-platform]').count()).toBeGreaterThanOrEqual(3)
-    await page.getByLabel('Key').fill(key)
+    await page.getByLabel('Short code').fill(key)
     await page.getByLabel('Name').fill('Heron 90')
     await page.getByLabel(/Motor top speed/).fill('11500')
     await page.getByLabel('Schema (JSON)').fill('{ "type": "object"')

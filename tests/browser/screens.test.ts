@@ -56,6 +56,7 @@ describe('every main page fits the screen, as each of its people sees it', async
   const kitId = (await tuner.call('GET', '/api/kits')).body.items[0].id as number
   const roadTestId = (await tuner.call('GET', `/api/vehicles/${demoId}/road-tests`)).body.items[0].id as number
   const pages = pagesFor({ carId: car.id, versionId: created.body.id, ownCarId, demoId, kitId, roadTestId })
+  const checkKeys = ((await (await signIn('admin@voltwright.test')).call('GET', '/api/workshop/checks')).body.items as { key: string }[]).map(c => c.key)
 
   for (const width of [390, 1280]) {
     describe(`at ${width} px`, async () => {
@@ -95,7 +96,16 @@ describe('every main page fits the screen, as each of its people sees it', async
         expect(text.match(/.{0,20}[{[].{0,20}/)?.[0], `JSON on ${path}`).toBeUndefined()
         expect(text.match(/\d\.\d{5,}/)?.[0], `a long decimal on ${path}`).toBeUndefined()
         expect(text).not.toMatch(/[0-9a-f]{64}/)
-        expect(internalNameIn(text), `a code on ${path}`).toBeUndefined()
+        expect(internalNameIn(text, checkKeys), `a code on ${path}`).toBeUndefined()
+      }
+      // A kit and a workshop's own check, as the manager set them up, in words: cars and years, limits in their unit.
+      for (const [label, words] of [['Kit created', '(1967–1978)'], ['Road-test check added', '13.2 V']] as const) {
+        await page.goto(`${baseUrl}/activity`, { waitUntil: 'networkidle' })
+        await page.getByLabel('What happened').selectOption({ label })
+        await expect.poll(() => historyText(page), label).toContain(words)
+        const text = await historyText(page)
+        expect(text.match(/Spec template|Platform key|Kit name|version no\b|year (to|from)/i)?.[0], label).toBeUndefined()
+        expect(internalNameIn(text, checkKeys), `a code under ${label}`).toBeUndefined()
       }
       await shot(page, 'screens-01-history-print')
     } finally {

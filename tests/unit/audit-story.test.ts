@@ -53,6 +53,8 @@ describe('the history in the workshop\'s words', () => {
     expect(internalNameIn(text), 'a code or field name').toBeUndefined()
     expect(text.match(/.{0,20}[{[].{0,20}/)?.[0], 'JSON').toBeUndefined()
     expect(text.match(TOO_PRECISE)?.[0], 'a long decimal').toBeUndefined()
+    const labels = [...story.facts.map(f => f.label), ...story.changes.map(c => c.label)]
+    expect(labels.find(l => /\b(id|no)$|^Spec template/i.test(l)), 'a label from the code').toBeUndefined()
     expect(text).not.toContain(entry.hash)
     expect(text).not.toContain(action)
     const auditors = story.auditors.map(r => `${r.label} ${r.value}`).join('\n')
@@ -89,7 +91,7 @@ describe('the history in the workshop\'s words', () => {
     const rt = eventStory(entryOf('road-test.recorded', samples['road-test.recorded']!))
     expect(rt.sentence).toBe('Sol Brannagh recorded a road test of Road v12: failed.')
     expect(rt.facts).toContainEqual({ label: 'Conditions', value: 'Wet, 9 °C, Forge loop, Quarry Lane (18 %)' })
-    expect(rt.checks).toContainEqual({ title: 'Lift-off regen', verdict: 'Pass', measured: 'Deceleration 1.20 m/s², Feel firm' })
+    expect(rt.checks).toContainEqual({ title: 'Lift-off regen', verdict: 'Pass', measured: 'Deceleration 1.20 m/s², felt firm' })
     expect(rt.checks).toContainEqual({ title: 'Full-power pull', verdict: 'Fail', measured: 'Speed reached 104 km/h, 0–50 km/h 4.1 s' })
     const log = eventStory(entryOf('road-test.telemetry-uploaded', samples['road-test.telemetry-uploaded']!))
     expect(log.facts).toContainEqual({ label: 'Energy recovered by regen', value: '134 Wh' })
@@ -140,8 +142,33 @@ describe('the history in the workshop\'s words', () => {
     expect(made.changes.map(c => c.label)).not.toContain('Short name')
     expect(visible(made)).not.toContain('tow-hitch')
     expect(made.auditors).toContainEqual({ label: 'Short code', value: 'tow-hitch' })
-    expect(made.changes.find(c => c.label.startsWith('Only for drive units'))!.after).toBe('Quennel 95, Fenlow 45')
+    expect(made.changes.find(c => c.label === 'For drive units')!.after).toBe('Quennel 95, Fenlow 45')
     const passFail = eventStory(entryOf('workshop-check.created', { entityType: 'workshop-check', data: { after: { key: 'heater', label: 'Heater and demister', record: 'pass-fail', unit: null, min: null, max: null, required: false } } }))
     expect(passFail.changes.map(c => c.label)).toEqual(['Check', 'Recorded as', 'Required on every road test'])
+  })
+
+  it('gives a measured check its limits in its unit, and leaves out the limits a pass-or-fail check has not', () => {
+    const volts = eventStory(entryOf('workshop-check.created', { entityType: 'workshop-check', data: { after: { key: 'twelve-volt', label: '12 V supply', record: 'number', unit: 'V', min: 13.2, max: 14.8, required: false, retired: false, platformKeys: null } } }))
+    expect(volts.changes.map(c => [c.label, c.after])).toEqual([
+      ['Check', '12 V supply'], ['Recorded as', 'A measured number'], ['Lowest allowed', '13.2 V'], ['Highest allowed', '14.8 V'], ['Unit', 'V'],
+      ['Required on every road test', 'no'], ['For drive units', 'every drive unit'], ['Retired', 'no']
+    ])
+    const lamps = eventStory(entryOf('workshop-check.created', { entityType: 'workshop-check', data: { after: { key: 'lamps', label: 'Lamps', record: 'pass-fail', unit: null, min: null, max: null, required: true, retired: false, platformKeys: null } } }))
+    expect(lamps.changes.map(c => c.label)).toEqual(['Check', 'Recorded as', 'Required on every road test', 'For drive units', 'Retired'])
+  })
+
+  it('tells a kit by its cars, years and typical car in words, and a car booked in from it by the kit\'s name', () => {
+    const kit = eventStory(entryOf('kit.created', samples['kit.created']!))
+    const rows = Object.fromEntries(kit.changes.map(c => [c.label, c.after]))
+    expect(rows).toMatchObject({ 'Fits': 'Tregarth Minim (1959–1969)', 'Drive unit': platforms[0]!.name, 'Typical car: kerb mass (converted), kg': '640', 'Typical car: driven axle': 'Rear wheels' })
+    const booked = eventStory(entryOf('vehicle.created', { entityType: 'vehicle', data: { after: { stockRef: 'OF-107', make: 'Penhallow', model: 'Kestrel Roadster', year: 1964, status: 'road-testing' }, kitId: 1, kitName: 'Forge RD-45', baselineVersionId: 9, baselineVersionNo: 1 } }))
+    expect(booked.sentence).toBe('Sol Brannagh booked in 1964 Penhallow Kestrel Roadster as OF-107 from the kit Forge RD-45, on its baseline v1.')
+    expect(visible(booked)).not.toMatch(/Kit name|version no/i)
+    expect(booked.auditors).toContainEqual({ label: 'Kit baseline version record', value: '9' })
+  })
+
+  it('counts warnings of one rule once, and calls a note a note', () => {
+    const sent = eventStory(entryOf('version.submitted', { entityType: 'version', data: { versionNo: 1, warnings: [{ rule: 'regen-grip-snow', severity: 'danger' }, { rule: 'regen-grip-snow', severity: 'danger' }, { rule: 'stop-lamp', severity: 'info' }] } }))
+    expect(sent.facts).toContainEqual({ label: 'Warnings', value: 'Regen against grip, snow (2 × danger); Stop lamps and regen (UN R13-H) (note)' })
   })
 })

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest'
 import { figureLines, settingLines } from '../../server/utils/handover/words'
-import { handoverCautions } from '../../shared/schemas/handover'
+import { driftNotice, handoverCautions } from '../../shared/schemas/handover'
 import { fenlow45 } from '../../shared/platforms/fenlow-45'
 import { quennel95 } from '../../shared/platforms/quennel-95'
 import { ROLES, roleSettings } from '../../shared/compute'
@@ -43,5 +43,12 @@ describe('the handover sheet in the owner\'s words', () => {
     expect(regen('rear')).toContain('rear-driven car it brakes the rear wheels')
     expect(regen('all')).toContain('all four wheels')
     expect(handoverCautions('front')).toHaveLength(5)
+  })
+
+  it('tells the owner of a car whose controller was found drifted not to rely on the sheet until a qualified engineer has checked it', () => {
+    const notice = driftNotice('3 Dec 2026')
+    expect(notice).toMatch(/^On 3 Dec 2026 the controller was found holding settings other than those on this sheet/)
+    expect(notice).toContain('do not rely on this sheet')
+    expect(notice).toContain('qualified engineer')
   })
 })

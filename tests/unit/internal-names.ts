@@ -6,6 +6,7 @@ import { versionStates } from '../../shared/schemas/version'
 import { vehicleStatuses } from '../../shared/schemas/vehicle'
 import { snagStatuses } from '../../shared/schemas/snag'
 import { auditActionLabels } from '../../shared/utils/audit-actions'
+import { platforms } from '../../shared/platforms'
 
 // Codes that are also how the workshop speaks: "the signed-off settings", "the minimum hill-start gradient".
 const english = new Set(['signed-off', 'hill-start', 'stop-lamp'])
@@ -14,7 +15,7 @@ const english = new Set(['signed-off', 'hill-start', 'stop-lamp'])
 // "draft" or "pass" is also English, a joined code is not.
 export const codeWords = [...new Set<string>([
   ...mandatoryCheckKeys, ...checkVerdicts, ...Object.keys(ruleTitles), ...versionStates, ...vehicleStatuses, ...snagStatuses,
-  ...Object.keys(auditActionLabels)
+  ...Object.keys(auditActionLabels), ...platforms.map(p => p.key), 'pass-fail'
 ].filter(c => /[-.]/.test(c) && !english.has(c)))]
 
 // "hill-start" on its own, not the "hill-start" inside "uphill-starts" nor a sentence's "lift-off regen".
@@ -23,9 +24,17 @@ const codePattern = new RegExp(`(?<![\\w.-])(${codeWords.map(c => c.replace(/[.-
 const CAMEL = /\b(?!kWh?\b)[a-z]+[A-Z][A-Za-z]*\b/ // a field name; kW and kWh are units
 const LEFT_OVER = /\b(undefined|NaN|null)\b|\[object Object\]/
 
-// The first internal name in the text, with a little of what surrounds it, or undefined.
-export function internalNameIn(text: string): string | undefined {
-  for (const re of [codePattern, CAMEL, LEFT_OVER]) {
+const escape = (c: string) => c.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')
+// A short name like a drive unit's: lower-case letters, a hyphen, a number ("quennel-95").
+const SHORT_NAME = /(?<![\w-])[a-z]+-\d+(?![\w-])/
+
+// The first internal name in the text, with a little of what surrounds it, or undefined. `extra`: codes of the
+// workshop's own, such as its road-test checks' keys.
+export function internalNameIn(text: string, extra: string[] = []): string | undefined {
+  const own = extra.filter(c => /[-.]/.test(c) && !english.has(c))
+  const ownPattern = own.length ? new RegExp(`(?<![\\w.-])(${own.map(escape).join('|')})(?![\\w-])`) : null
+  for (const re of [codePattern, ownPattern, SHORT_NAME, CAMEL, LEFT_OVER]) {
+    if (!re) continue
     const m = re.exec(text)
     if (m) return text.slice(Math.max(0, m.index - 30), m.index + m[0].length + 30)
   }

@@ -3,6 +3,7 @@ import { formatDateTime } from '../../../shared/utils/dates'
 import type { HandoverProfile, HandoverSheet } from '../../../shared/schemas/handover'
 import { ink, SheetWriter, type Symbol } from './pdf-writer'
 
+const severityWords: Record<string, string> = { danger: 'DANGER', caution: 'CAUTION', info: 'NOTE' }
 const day = (iso: string | null) => iso ? `${formatDateTime(iso, { timeZone: 'UTC' })} UTC` : '—'
 
 function header(w: SheetWriter, s: HandoverSheet) {
@@ -32,7 +33,7 @@ function warnings(w: SheetWriter, p: HandoverProfile) {
     w.ensure(h)
     const y = w.doc.y
     w.symbol(warn.severity as Symbol, w.left, y + 1)
-    w.text(warn.severity.toUpperCase(), { x: w.left + 16, y, width: 60, size: 8.5, weight: 'semibold', color: warn.severity === 'danger' ? ink.danger : ink.graphite })
+    w.text(severityWords[warn.severity] ?? warn.severity, { x: w.left + 16, y, width: 60, size: 8.5, weight: 'semibold', color: warn.severity === 'danger' ? ink.danger : ink.graphite })
     w.text(body, { x: w.left + 80, y, width: w.width - 80, size: 9.5 })
     w.text(why, { x: w.left + 80, width: w.width - 80, size: 9, color: ink.mute })
     w.doc.y += 6
@@ -79,9 +80,37 @@ function people(w: SheetWriter, p: HandoverProfile) {
   w.section('Who proposed, approved and tested it')
   for (const person of p.people) {
     w.ensure(40)
-    w.row(person.role, `${person.name}, ${day(person.at)}`, person.hash ? `${person.hashLabel} ${person.hash}` : undefined, 150)
+    w.row(person.role, `${person.name}, ${day(person.at)}`, undefined, 150)
   }
+}
+
+// The records' fingerprints, once each, at the end of the sheet where the owner's reading is done.
+function fingerprints(w: SheetWriter, s: HandoverSheet) {
+  w.section('For auditors: the records\' fingerprints')
   w.text('Each hash is a SHA-256 fingerprint of the record as it was approved or signed. The workshop\'s register can show that the record has not changed since.', { size: 8, color: ink.mute })
+  w.doc.y += 4
+  for (const p of s.profiles) {
+    const seen = new Set<string>()
+    for (const person of p.people) {
+      if (!person.hash || seen.has(person.hash)) continue
+      seen.add(person.hash)
+      w.ensure(28)
+      w.text(`“${p.profileName}”, version ${p.versionNo}: ${person.hashLabel}`, { size: 8.5, color: ink.soft })
+      w.text(person.hash, { size: 8.5 })
+      w.doc.y += 3
+    }
+  }
+}
+
+function notice(w: SheetWriter, s: HandoverSheet) {
+  if (!s.notice) return
+  const h = w.height(s.notice, w.width - 54, 10.5) + 20
+  const y = w.doc.y
+  w.doc.rect(w.left, y, w.width, h).fill(ink.paper)
+  w.doc.rect(w.left, y, 3, h).fill(ink.danger)
+  w.symbol('danger', w.left + 14, y + 10, 14)
+  w.text(s.notice, { x: w.left + 40, y: y + 10, width: w.width - 54, size: 10.5, weight: 'semibold' })
+  w.doc.y = y + h + 6
 }
 
 function profile(w: SheetWriter, p: HandoverProfile) {
@@ -98,10 +127,10 @@ function profile(w: SheetWriter, p: HandoverProfile) {
 }
 
 function cautions(w: SheetWriter, s: HandoverSheet) {
-  w.section('Please read')
   const text = s.cautions.map(c => `•  ${c}`).join('\n')
   const h = w.height(text, w.width - 40, 9.5) + s.cautions.length * 4 + 24
-  w.ensure(h)
+  w.ensure(h + 60) // the heading stays with its box
+  w.section('Please read')
   const y = w.doc.y
   w.doc.rect(w.left, y, w.width, h).fill(ink.paper)
   w.doc.rect(w.left, y, 3, h).fill(ink.copper)
@@ -117,6 +146,7 @@ function cautions(w: SheetWriter, s: HandoverSheet) {
 export async function renderHandoverPdf(s: HandoverSheet): Promise<Buffer> {
   const w = await SheetWriter.create({ Title: `Handover sheet: ${s.car.title} (${s.car.stockRef})`, Author: s.workshop, Subject: 'Motor-controller settings at handover', Creator: 'Voltwright' })
   header(w, s)
+  notice(w, s)
   w.section('The car')
   for (const f of s.carFacts) w.row(f.label, f.value, f.note)
   for (const p of s.profiles) profile(w, p)
@@ -124,6 +154,7 @@ export async function renderHandoverPdf(s: HandoverSheet): Promise<Buffer> {
   if (!s.enhancements.length) w.text('None outstanding.', { size: 10 })
   for (const e of s.enhancements) w.row(e.title, e.detail || '—', `Priority: ${e.priority}`)
   cautions(w, s)
+  fingerprints(w, s)
   w.footer((page, pages) => `${s.car.stockRef}  ·  ${s.car.title}  ·  Handover sheet  ·  page ${page} of ${pages}`)
   return w.finish()
 }

@@ -2,9 +2,11 @@ import type { RecordedCheck } from '../../../shared/schemas/workshop-checks'
 // Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
-import { handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
+import { driftNotice, handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
-import { checkGuides, checkTitles } from '../../../shared/schemas/road-test-checks'
+import { checkTitles } from '../../../shared/schemas/road-test-checks'
+import { measuredValues } from '../../../shared/utils/check-measures'
+import { formatDate } from '../../../shared/utils/dates'
 import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
 import type { TelemetrySummary } from '../../../shared/telemetry/summary'
@@ -13,25 +15,13 @@ import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { recordedVersionActors } from '../history/recorded-names'
 import { localeNumber } from '../../../shared/utils/number-format'
 
-// Decelerations with two decimals as the trade compares them; other measurements as typed.
-const numberWords = (k: string, v: number) => localeNumber(v, k === 'decelMs2' ? { minimumFractionDigits: 2, maximumFractionDigits: 2 } : { maximumFractionDigits: 2 })
-const units: Record<string, string> = { gradientPct: '% gradient', rollbackMm: 'mm roll-back', decelMs2: 'm/s²', speedKph: 'km/h', holdsOnGradientPct: '% held', peakSpeedKph: 'km/h peak', zeroTo50S: 's 0–50 km/h', motorC: '°C motor', inverterC: '°C inverter', batteryC: '°C battery' }
-
-// In the order the check's guide lists its values (JSONB does not keep the order they were sent in).
-function measured(key: string, values: Record<string, unknown>): string {
-  const order = checkGuides.find(g => g.key === key)?.fields.map(f => f.name) ?? []
-  const rank = (k: string) => (order.includes(k) ? order.indexOf(k) : order.length)
-  return Object.entries(values ?? {}).sort(([a], [b]) => rank(a) - rank(b)).filter(([, v]) => v !== null && v !== undefined && v !== '')
-    .map(([k, v]) => typeof v === 'number' ? `${numberWords(k, v)} ${units[k] ?? ''}`.trim() : k === 'feel' ? `felt ${String(v)}` : String(v)).join(', ') || '—'
-}
-
 // A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.
 function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
   const def = list.find(d => d.key === c.key)
   const value = def && typeof c.values?.value === 'number' ? `${localeNumber(c.values.value, { maximumFractionDigits: 2 })}${def.unit ? ` ${def.unit}` : ''}` : '—'
   return {
     label: def?.label ?? checkTitles[c.key as CheckKey] ?? c.key, verdict: checkVerdictLabels[c.verdict as CheckVerdict] ?? c.verdict,
-    measured: def ? value : measured(c.key, c.values), note: c.note
+    measured: def ? value : measuredValues(c.key, c.values).join(', ') || '—', note: c.note
   }
 }
 
@@ -42,7 +32,7 @@ function logLines(s: TelemetrySummary | undefined) {
     { label: 'Logged', value: `${localeNumber(s.samples)} samples over ${f(s.durationS / 60, 1)} min` },
     { label: 'Peak speed', value: `${f(s.peakSpeedKph, 0)} km/h` },
     { label: 'Peak battery power', value: `${f(s.peakPowerKw, 1)} kW` },
-    { label: 'Strongest lift-off slowing', value: `${f(s.peakLiftOffDecelMs2, 2)} m/s²` },
+    { label: 'Strongest lift-off slowing', value: `${s.peakLiftOffDecelMs2 === null ? '—' : localeNumber(s.peakLiftOffDecelMs2, { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²` },
     { label: 'Roll-back on the hill start', value: `${f(s.maxRollbackM * 1000, 0)} mm` },
     { label: 'Peak temperatures', value: `motor ${f(s.peakMotorC, 0)} °C, inverter ${f(s.peakInverterC, 0)} °C, battery ${f(s.peakBatteryC, 0)} °C` },
     { label: 'Energy', value: `${f(s.energyOutWh / 1000, 2)} kWh used, ${f(s.energyRegenWh / 1000, 2)} kWh recovered by regen` }
@@ -96,6 +86,7 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
     carFacts: carFactLines(vehicle.spec, vehicle.platform?.name ?? ''),
     profiles: await Promise.all(onCar.map(p => profileSheet(vehicle, p, versions.find(v => v.id === p.onCarVersionId)!))),
     enhancements: enhancements.map(s => ({ title: s.title, detail: s.detail, priority: snagPriorityLabels[s.priority as SnagPriority] })),
-    cautions: handoverCautions(vehicle.spec.drivenAxle)
+    cautions: handoverCautions(vehicle.spec.drivenAxle),
+    notice: vehicle.driftedAt ? driftNotice(formatDate(vehicle.driftedAt, { timeZone: 'UTC' })) : null
   }
 }

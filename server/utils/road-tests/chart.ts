@@ -20,7 +20,7 @@ export async function compareWithModel(rt: RoadTest, tested: TestedVersion, summ
   const { figures } = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, settings)
   const measuredDecel = summary?.peakLiftOffDecelMs2 ?? valueOf(rt, 'lift-off-regen', 'decelMs2')
   return {
-    liftOffDecel: { predictedMs2: figures.liftOffDecelMs2, measuredMs2: measuredDecel, gripLimitMs2: figures.regenGripLimitMs2[rt.conditions.surface] ?? null },
+    liftOffDecel: { predictedMs2: figures.liftOffDecelMs2, measuredMs2: measuredDecel, gripLimitMs2: figures.regenGripLimitMs2[rt.conditions.surface] ?? null, drivenAxle: vehicle.spec.drivenAxle },
     startGrade: { predictedMaxPct: figures.maxStartGradePct, testedPct: valueOf(rt, 'hill-start', 'gradientPct'), limitedBy: figures.startGradeLimitedBy },
     rollback: { measuredM: summary?.maxRollbackM ?? null, reportedMm: valueOf(rt, 'hill-start', 'rollbackMm') },
     topSpeed: { predictedKph: figures.topSpeedKph, measuredKph: summary?.peakSpeedKph ?? valueOf(rt, 'full-power', 'peakSpeedKph') }
