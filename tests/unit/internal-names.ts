@@ -8,19 +8,15 @@ import { snagStatuses } from '../../shared/schemas/snag'
 import { auditActionLabels } from '../../shared/utils/audit-actions'
 import { platforms } from '../../shared/platforms'
 
-// Codes that are also how the workshop speaks: "the signed-off settings", "the minimum hill-start gradient".
-const english = new Set(['signed-off', 'hill-start', 'stop-lamp'])
-
 // Codes of more than one word ("lift-off-regen", "road-testing", "version.signed-off"): a plain word such as
-// "draft" or "pass" is also English, a joined code is not.
-export const codeWords = [...new Set<string>([
-  ...mandatoryCheckKeys, ...checkVerdicts, ...Object.keys(ruleTitles), ...versionStates, ...vehicleStatuses, ...snagStatuses,
-  ...Object.keys(auditActionLabels), ...platforms.map(p => p.key), 'pass-fail'
-].filter(c => /[-.]/.test(c) && !english.has(c)))]
+// "draft" or "pass" is also English, a joined code is not. A two-word check or rule key ("hill-start",
+// "creep-hold") is also how the workshop writes a compound ("the minimum hill-start gradient"), so only the
+// longer ones count; states, stages and action codes count whole.
+const longKeys = [...mandatoryCheckKeys, ...Object.keys(ruleTitles)].filter(c => c.split('-').length > 2)
+const states = [...checkVerdicts, ...versionStates, ...vehicleStatuses, ...snagStatuses].filter(c => c.includes('-') && c !== 'signed-off') // "the signed-off settings"
+export const codeWords = [...new Set<string>([...longKeys, ...states, ...Object.keys(auditActionLabels), ...platforms.map(p => p.key), 'pass-fail'])]
 
-// "hill-start" on its own, not the "hill-start" inside "uphill-starts" nor a sentence's "lift-off regen".
-// "full-power pull" is the check's own name in words.
-const codePattern = new RegExp(`(?<![\\w.-])(${codeWords.map(c => c.replace(/[.-]/g, m => `\\${m}`)).join('|')})(?![\\w-]| pull)`)
+const codePattern = new RegExp(`(?<![\\w.-])(${codeWords.map(c => c.replace(/[.-]/g, m => `\\${m}`)).join('|')})(?![\\w-])`)
 const CAMEL = /\b(?!kWh?\b)[a-z]+[A-Z][A-Za-z]*\b/ // a field name; kW and kWh are units
 const LEFT_OVER = /\b(undefined|NaN|null)\b|\[object Object\]/
 
@@ -31,7 +27,7 @@ const SHORT_NAME = /(?<![\w-])[a-z]+-\d+(?![\w-])/
 // The first internal name in the text, with a little of what surrounds it, or undefined. `extra`: codes of the
 // workshop's own, such as its road-test checks' keys.
 export function internalNameIn(text: string, extra: string[] = []): string | undefined {
-  const own = extra.filter(c => /[-.]/.test(c) && !english.has(c))
+  const own = extra.filter(c => c.split('-').length > 2) // as the check keys above
   const ownPattern = own.length ? new RegExp(`(?<![\\w.-])(${own.map(escape).join('|')})(?![\\w-])`) : null
   for (const re of [codePattern, ownPattern, SHORT_NAME, CAMEL, LEFT_OVER]) {
     if (!re) continue
