@@ -31,7 +31,7 @@ describe('a refusal in its person\'s words, and the hashes kept for the auditors
       await shot(page, 'refusals-01-owner')
       await page.goto(`${baseUrl}/cars/${drifted}/handover`, { waitUntil: 'networkidle' })
       await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe('Car not found')
-      expect(await page.getByRole('link', { name: 'Back to the car' }).count()).toBe(0)
+      expect(await page.getByRole('link', { name: 'Back to the car', exact: true }).count()).toBe(0)
     } finally {
       await context.close()
     }
