@@ -27,7 +27,7 @@ const SHORT_NAME = /(?<![\w-])[a-z]+-\d+(?![\w-])/
 // The first internal name in the text, with a little of what surrounds it, or undefined. `extra`: codes of the
 // workshop's own, such as its road-test checks' keys.
 export function internalNameIn(text: string, extra: string[] = []): string | undefined {
-  const own = extra.filter(c => c.split('-').length > 2) // as the check keys above
+  const own = extra.filter(c => c.includes('-')) // the workshop's own keys are never how it writes a word
   const ownPattern = own.length ? new RegExp(`(?<![\\w.-])(${own.map(escape).join('|')})(?![\\w-])`) : null
   for (const re of [codePattern, ownPattern, SHORT_NAME, CAMEL, LEFT_OVER]) {
     if (!re) continue
