@@ -5,7 +5,7 @@ import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
 import { firstPlatforms as platforms } from '../shared/platforms'
 import { vehicleSpecSchema } from '../shared/schemas/vehicle-spec'
 import { demoCars, secondWorkshopCar, type DemoCar } from './demo-cars'
-import type { DemoStory, SeedContext } from './demo-story'
+import { bookIn, type DemoStory, type SeedContext } from './demo-story'
 
 // Demo only: every demo person signs in with this password (README).
 const DEMO_PASSWORD = 'voltwright-demo'
@@ -46,7 +46,7 @@ async function addCar(qi: QueryInterface, t: Transaction, story: DemoStory, work
   const id = await insert(qi, t, `INSERT INTO vehicles ("workshopId", "stockRef", make, model, year, "chassisNumber", registration, "ownerUserId", status, spec, "platformId", "createdAt", "updatedAt")
     VALUES (:workshopId, :stockRef, :make, :model, :year, :chassisNumber, :registration, :ownerId, :status, CAST(:spec AS jsonb), :platformId, :at, :at) RETURNING id`,
   { workshopId, ...car, ownerId, spec: JSON.stringify(spec), platformId: platformIds[car.platformIndex], at })
-  story.add(at, { workshopId, vehicleId: id, actorId, action: 'vehicle.created', entityType: 'vehicle', entityId: id, data: { stockRef: car.stockRef, make: car.make, model: car.model, status: car.status } })
+  bookIn(story, { workshopId, vehicleId: id, actorId }, car)
 }
 
 const setUpBefore = (story: DemoStory, cars: DemoCar[]) => story.day(Math.max(...cars.map(c => c.intakeDaysAgo)) + 1, '08:00')

@@ -36,7 +36,10 @@ export const up: MigrationFn<SeedContext> = async ({ context: { qi, t, story } }
     const [row] = await select(qi, t, `INSERT INTO snags ("workshopId", "vehicleId", kind, title, detail, priority, status, "assigneeId", blocking, "createdById", "createdAt", "updatedAt")
       VALUES (:w, :v, :kind, :title, :detail, :priority, :status, :assignee, :blocking, :by, :at, :at) RETURNING id`,
     { w: car.workshopId, v: car.id, ...s, assignee: s.assignee ? people[s.assignee] ?? null : null, by: tester, at })
-    story.add(at, { workshopId: car.workshopId, vehicleId: car.id, actorId: tester, action: 'snag.created', entityType: 'snag', entityId: row!.id, data: { after: { kind: s.kind, title: s.title, priority: s.priority, status: s.status, blocking: s.blocking } } })
+    const event = { workshopId: car.workshopId, vehicleId: car.id, entityType: 'snag', entityId: row!.id }
+    // Raised open (and unassigned unless it was given to someone then); taken in hand or closed a day later, by its assignee.
+    story.add(at, { ...event, actorId: tester, action: 'snag.created', data: { after: { kind: s.kind, title: s.title, priority: s.priority, status: 'open', blocking: s.blocking, assigneeId: s.assignee ? people[s.assignee] ?? null : null } } })
+    if (s.status !== 'open') story.add(story.after(at, Math.min(24 * 60, s.daysAgo * 12 * 60)), { ...event, actorId: (s.assignee && people[s.assignee]) || tester, action: 'snag.updated', data: { patch: [{ op: 'test', path: '/status', value: 'open' }, { op: 'replace', path: '/status', value: s.status }] } })
   }
 }
 

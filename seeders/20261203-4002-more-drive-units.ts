@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize'
 import { morePlatforms } from '../shared/platforms'
 import { vehicleSpecSchema } from '../shared/schemas/vehicle-spec'
 import { moreDemoCars } from './demo-cars'
-import type { SeedContext } from './demo-story'
+import { bookIn, type SeedContext } from './demo-story'
 
 // Three more shared drive units whose controllers have settings of their own (amps, hp and mph, switches,
 // modes and a throttle map); a key already there is left alone.
@@ -33,7 +33,7 @@ async function addCars({ qi, t, story }: SeedContext) {
          FROM platforms p WHERE p.key = :platformKey AND p."workshopId" IS NULL RETURNING id`,
       { replacements: { workshopId: w.id, ...car, spec: JSON.stringify(spec), intake }, type: QueryTypes.SELECT, transaction: t })
     if (!row) continue
-    story.add(intake, { workshopId: w.id, vehicleId: row.id, actorId: w.adminId, action: 'vehicle.created', entityType: 'vehicle', entityId: row.id, data: { stockRef: car.stockRef, make: car.make, model: car.model, status: car.status } })
+    bookIn(story, { workshopId: w.id, vehicleId: row.id, actorId: w.adminId }, car)
   }
 }
 

@@ -3,7 +3,7 @@ import type { QueryInterface, Transaction } from 'sequelize'
 import { vehicleSpecSchema } from '../shared/schemas/vehicle-spec'
 import { addVersion, profileOpened, rows, type Car, type Made } from './20261201-0002-demo-profiles'
 import { demoKits, type DemoKit } from './demo-kits'
-import type { SeedContext } from './demo-story'
+import { bookIn, type SeedContext } from './demo-story'
 
 type Base = Omit<Car, 'id' | 'spec'>
 
@@ -38,7 +38,7 @@ async function addKit(seed: SeedContext, base: Base, people: Record<string, numb
       VALUES (:w, :stockRef, :make, :model, :year, :chassisNumber, :registration, :status, CAST(:spec AS jsonb), :platformId, :kitId, :intake, :intake) RETURNING id`,
     { w: base.workshopId, ...c.car, spec: JSON.stringify(spec), platformId, kitId, intake })
     const from = baseline[c.onBaselineNo - 1]!
-    story.add(intake, { workshopId: base.workshopId, vehicleId: id, actorId: people[c.versions[0]!.author]!, action: 'vehicle.created', entityType: 'vehicle', entityId: id, data: { stockRef: c.car.stockRef, make: c.car.make, model: c.car.model, status: c.car.status, kitId, kitName: kit.name, baselineVersionId: from.id, baselineVersionNo: c.onBaselineNo } })
+    bookIn(story, { workshopId: base.workshopId, vehicleId: id, actorId: people[c.versions[0]!.author]! }, c.car, { kitId, kitName: kit.name, baselineVersionId: from.id, baselineVersionNo: c.onBaselineNo })
     const opened = profileOpened(story, c.versions[0]!)
     const carProfileId = await insert(qi, t, `INSERT INTO profiles ("workshopId", "vehicleId", name, "createdAt", "updatedAt") VALUES (:w, :id, 'Road', :opened, :opened) RETURNING id`, { w: base.workshopId, id, opened })
     story.add(opened, { workshopId: base.workshopId, vehicleId: id, actorId: people[c.versions[0]!.author]!, action: 'profile.created', entityType: 'profile', entityId: carProfileId, data: { name: 'Road' } })

@@ -6,6 +6,7 @@ export interface DemoCar {
   status: 'intake' | 'converting' | 'road-testing' | 'snagging' | 'handed-over'
   platformIndex: number, ownedByClient: boolean, spec: VehicleSpecInput
   intakeDaysAgo: number // when the car came in, in days before the seed run (seeders/demo-story.ts)
+  staged?: { daysAgo: number, time: string } // when it reached its present stage, if not the morning after intake
 }
 
 const pack = { packNominalVoltageV: 355, packCapacityKwh: 32, packMaxChargeCurrentA: 110, packMaxDischargeCurrentA: 320, chargerPowerKw: 7.4 }
@@ -13,7 +14,7 @@ const pack = { packNominalVoltageV: 355, packCapacityKwh: 32, packMaxChargeCurre
 export const demoCars: DemoCar[] = [
   {
     stockRef: 'OF-101', make: 'Penhallow', model: 'Marten Roadster', year: 1962, chassisNumber: 'PM62-04417', registration: 'KJX 442A', intakeDaysAgo: 30,
-    status: 'road-testing', platformIndex: 0, ownedByClient: true,
+    status: 'road-testing', staged: { daysAgo: 5, time: '11:00' }, platformIndex: 0, ownedByClient: true,
     spec: { kerbMassKg: 905, frontAxleLoadPct: 47, wheelbaseMm: 2235, cgHeightMm: 470, tyreSize: '155/80 R13 79T', finalDriveRatio: 7.2, drivetrainEfficiency: 0.9, dragCoefficient: 0.46, frontalAreaM2: 1.55, rollingResistanceCoeff: 0.011, drivenAxle: 'rear', originalEnginePowerKw: 46, ...pack, packCapacityKwh: 24 }
   },
   {
@@ -23,12 +24,12 @@ export const demoCars: DemoCar[] = [
   },
   {
     stockRef: 'OF-103', make: 'Tregarth', model: 'Minim 850', year: 1965, chassisNumber: 'TM65-90031', registration: 'DLP 71C', intakeDaysAgo: 75,
-    status: 'handed-over', platformIndex: 0, ownedByClient: true,
+    status: 'handed-over', staged: { daysAgo: 57, time: '16:00' }, platformIndex: 0, ownedByClient: true,
     spec: { kerbMassKg: 760, frontAxleLoadPct: 61, wheelbaseMm: 2035, cgHeightMm: 450, tyreSize: '145/80 R12 74S', finalDriveRatio: 6.8, drivetrainEfficiency: 0.91, dragCoefficient: 0.42, frontalAreaM2: 1.45, rollingResistanceCoeff: 0.011, drivenAxle: 'front', originalEnginePowerKw: 25, ...pack, packNominalVoltageV: 230, packCapacityKwh: 18, packMaxDischargeCurrentA: 250, chargerPowerKw: 3.6 }
   },
   {
     stockRef: 'OF-104', make: 'Morrow', model: 'Fitch Coupé', year: 1969, chassisNumber: 'MF69-11206', registration: 'PYH 905G', intakeDaysAgo: 45,
-    status: 'snagging', platformIndex: 1, ownedByClient: false,
+    status: 'snagging', staged: { daysAgo: 19, time: '16:00' }, platformIndex: 1, ownedByClient: false,
     spec: { kerbMassKg: 1180, frontAxleLoadPct: 53, wheelbaseMm: 2390, cgHeightMm: 500, tyreSize: '185/70 R14 88H', finalDriveRatio: 7.9, drivetrainEfficiency: 0.9, dragCoefficient: 0.40, frontalAreaM2: 1.8, rollingResistanceCoeff: 0.010, drivenAxle: 'rear', originalEnginePowerKw: 85, ...pack, packCapacityKwh: 38 }
   },
   {

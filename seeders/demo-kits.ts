@@ -24,7 +24,7 @@ export const demoKits: DemoKit[] = [
     ],
     cars: [
       {
-        car: { stockRef: 'OF-107', make: 'Penhallow', model: 'Kestrel Roadster', year: 1964, chassisNumber: 'PM64-05120', registration: 'HWP 208B', intakeDaysAgo: 25, status: 'road-testing' },
+        car: { stockRef: 'OF-107', make: 'Penhallow', model: 'Kestrel Roadster', year: 1964, chassisNumber: 'PM64-05120', registration: 'HWP 208B', intakeDaysAgo: 25, status: 'road-testing', staged: { daysAgo: 19, time: '11:00' } },
         spec: { kerbMassKg: 915, cgHeightMm: 465 }, onBaselineNo: 1,
         versions: [{ author: tuner, daysAgo: 20, state: 'approved', parameters: { ...roadster, powerCapKw: 40, speedLimitKph: 110 }, rationale: 'From the kit baseline; 40 kW and 110 km/h for this car\'s original cross-ply-era wheels.', review: { by: lead, decision: 'approve', comment: 'Fine for the road test.' } }]
       },

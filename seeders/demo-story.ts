@@ -52,3 +52,17 @@ export function roadTestMoments(story: DemoStory, approved: Date) {
 
 // What every demo seeder is given: the query interface, the seed run's one transaction and its story.
 export interface SeedContext { qi: QueryInterface, t: Transaction, story: DemoStory }
+
+type Stage = 'intake' | 'converting' | 'road-testing' | 'snagging' | 'handed-over'
+export interface BookedCar { stockRef: string, make: string, model: string, year: number, status: Stage, intakeDaysAgo: number, staged?: { daysAgo: number, time: string } }
+
+// A demo car's booking-in as it was that morning, at intake, and its move to the stage it has now: on `staged`,
+// else the next morning (work starts). The history then reads as of each event's own day, not as of the seed run.
+export function bookIn(story: DemoStory, event: { workshopId: number, vehicleId: number, actorId: number }, car: BookedCar, more: Record<string, unknown> = {}) {
+  const intake = story.day(car.intakeDaysAgo, '08:30')
+  const base = { ...event, entityType: 'vehicle', entityId: event.vehicleId }
+  story.add(intake, { ...base, action: 'vehicle.created', data: { after: { stockRef: car.stockRef, make: car.make, model: car.model, year: car.year, status: 'intake' }, ...more } })
+  if (car.status === 'intake') return
+  const staged = car.staged ? story.day(car.staged.daysAgo, car.staged.time) : car.intakeDaysAgo > 0 ? story.day(car.intakeDaysAgo - 1, '08:30') : story.after(intake, 60)
+  story.add(staged, { ...base, action: 'vehicle.status-changed', data: { from: 'intake', to: car.status } })
+}

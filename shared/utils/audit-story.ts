@@ -39,7 +39,9 @@ function sentenceOf(e: HistoryEntry, d: Data): string {
   const who = e.actor?.name ?? 'Voltwright'
   const ver = versionName(e, d)
   const after = obj(d.after)
-  const snag = e.names.snag ?? str(after.title)
+  // What the event itself recorded comes first: a name looked up elsewhere is only for what it did not record.
+  const snag = (e.action === 'snag.created' ? str(after.title) : undefined) ?? e.names.snag ?? str(after.title)
+  const person = str(after.name) ?? str(d.name) ?? e.names.person
   switch (e.action) {
     case 'vehicle.created': {
       const car = [after.year ?? d.year, after.make ?? d.make, after.model ?? d.model].filter(Boolean).join(' ')
@@ -50,8 +52,16 @@ function sentenceOf(e: HistoryEntry, d: Data): string {
     case 'vehicle.updated': return `${who} changed the car's facts`
     case 'vehicle.drift-cleared': return `${who} cleared the car's drift warning${e.names.version ? ` with ${e.names.version} signed off` : ''}`
     case 'vehicle.status-changed': return `${who} moved the car from ${stageWords(d.from)} to ${stageWords(d.to)}${e.names.version || str(d.because)?.startsWith('road test') ? ' on recording a road test' : ''}`
-    case 'user.created': return `${who} added ${e.names.person ?? str(after.name) ?? 'a person'} to the workshop${Array.isArray(after.roles) ? ` as ${valueText(after.roles, 'roles').toLowerCase()}` : ''}`
+    case 'user.created': return `${who} added ${person ?? 'a person'} to the workshop${Array.isArray(after.roles) ? ` as ${valueText(after.roles, 'roles').toLowerCase()}` : ''}`
     case 'user.updated': return `${who} changed ${e.names.person ? `${e.names.person}'s` : 'a person\'s'} account${d.passwordChanged === true ? ' and set a new password' : ''}`
+    case 'user.renamed': {
+      const renamed = e.changes.find(c => c.path === '/name')
+      return `${who} renamed ${renamed?.beforeKnown && typeof renamed.before === 'string' ? renamed.before : 'a person'} to ${person ?? 'a new name'}`
+    }
+    case 'user.roles-changed': return `${who} changed ${person ? `${person}'s` : 'a person\'s'} roles`
+    case 'user.deactivated': return `${who} stood ${person ?? 'a person'} down: they can no longer sign in`
+    case 'user.reactivated': return `${who} let ${person ?? 'a person'} sign in again`
+    case 'user.password-changed': return `${who} set a new password for ${person ?? 'a person'}`
     case 'profile.created': return `${who} started the profile ${str(d.name) ?? str(after.name) ?? ''}`.trimEnd()
     case 'version.created': return `${who} drafted ${ver}${e.names.parentVersion ? ` from ${e.names.parentVersion}` : num(d.parentVersionNo) ? ` from v${d.parentVersionNo}` : ''}`
     case 'version.updated':

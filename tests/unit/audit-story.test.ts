@@ -7,6 +7,7 @@ import { entryOf, legacySamples, samples } from './audit-story-fixtures'
 import { creationRows } from '../../shared/utils/audit-changes'
 import { internalNameIn } from './internal-names'
 import { platforms } from '../../shared/platforms'
+import { nameAt, type NameTimeline } from '../../server/utils/history/name-timeline'
 
 // Every action the product writes, read from its writers: each `action:` of an audit event in server/ and seeders/.
 function writtenActions(): Set<string> {
@@ -165,6 +166,32 @@ describe('the history in the workshop\'s words', () => {
     expect(booked.sentence).toBe('Sol Brannagh booked in 1964 Penhallow Kestrel Roadster as OF-107 from the kit Forge RD-45, on its baseline v1.')
     expect(visible(booked)).not.toMatch(/Kit name|version no/i)
     expect(booked.auditors).toContainEqual({ label: 'Kit baseline version record', value: '9' })
+  })
+
+  it('reads each event as of its own time: what it recorded before any name looked up today', () => {
+    // A snag raised open and retitled since: the raising names it as it was raised, with the stage it had then.
+    const raised = entryOf('snag.created', { entityType: 'snag', data: { after: { kind: 'remedial', title: 'Wiper slow', priority: 'normal', status: 'open', blocking: true } }, names: { snag: 'Wiper motor replaced' } })
+    const story = eventStory(raised)
+    expect(story.sentence).toBe('Sol Brannagh raised the snag “Wiper slow”, which blocks sign-off.')
+    expect(story.changes.find(c => c.label === 'Status')?.after).toBe('Open')
+    // A car booked in at intake reads "intake" however far it has gone since.
+    const booked = eventStory(entryOf('vehicle.created', { entityType: 'vehicle', data: { after: { stockRef: 'OF-103', make: 'Tregarth', model: 'Minim 850', year: 1965, status: 'intake' } } }))
+    expect(booked.changes.find(c => c.label === 'Stage')?.after).toBe('Intake')
+    // A person added under one name and renamed since is added under the name they had.
+    expect(eventStory(entryOf('user.created', { entityType: 'user', data: { after: { email: 'o@forge.test', name: 'Orla Quint', roles: ['engineer'] } }, names: { person: 'Orla Brannock' } })).sentence)
+      .toBe('Sol Brannagh added Orla Quint to the workshop as senior engineer.')
+    expect(eventStory(entryOf('user.renamed', samples['user.renamed']!)).sentence).toBe('Sol Brannagh renamed Sol Brannagh to Sol Penrose.')
+    expect(eventStory(entryOf('user.deactivated', samples['user.deactivated']!)).sentence).toBe('Sol Brannagh stood Sol Brannagh down: they can no longer sign in.')
+  })
+
+  it('names a record in each event as it was named then', () => {
+    // Orla Quint from event 10, renamed Orla Brannock at event 50; a snag raised "Wiper slow" at 20, retitled at 40.
+    const people: NameTimeline = new Map([[7, [{ from: 50n, name: 'Orla Brannock', before: 'Orla Quint' }]]])
+    expect(nameAt(people, 7, 10n, 'Orla Brannock')).toBe('Orla Quint')
+    expect(nameAt(people, 7, 50n, 'Orla Brannock')).toBe('Orla Brannock')
+    expect(nameAt(people, 8, 10n, 'Ida Penrose')).toBe('Ida Penrose') // never renamed: the name today
+    const snags: NameTimeline = new Map([[3, [{ from: 20n, name: 'Wiper slow' }, { from: 40n, name: 'Wiper motor replaced' }]]])
+    expect([20n, 30n, 40n, 90n].map(at => nameAt(snags, 3, at, undefined))).toEqual(['Wiper slow', 'Wiper slow', 'Wiper motor replaced', 'Wiper motor replaced'])
   })
 
   it('counts warnings of one rule once, and calls a note a note', () => {

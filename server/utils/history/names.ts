@@ -1,11 +1,14 @@
-// The names the history shows in place of record numbers: a version as "Road v12", a person, a snag's title.
-// Looked up once per page, a query per kind of record, all scoped to the workshop.
+// The names the history shows in place of record numbers: a version as "Road v12", a person, a snag's title,
+// each as it was when the event was written (names-then.ts). Looked up once per page, a query per kind of
+// record, all scoped to the workshop.
 import { QueryTypes } from 'sequelize'
 import type { EventNames } from '../../../shared/schemas/history'
 import { isPatch } from '../../../shared/utils/audit-changes'
 import { useDatabase } from '../database/db'
+import { personTimeline, snagTimeline } from './names-then'
+import { nameAt } from './name-timeline'
 
-export interface NamedRow { action: string, entityType: string, entityId: string, data: Record<string, unknown> }
+export interface NamedRow { id: string, action: string, entityType: string, entityId: string, data: Record<string, unknown> }
 
 const idOf = (x: unknown) => (typeof x === 'number' || (typeof x === 'string' && /^\d{1,10}$/.test(x)) ? Number(x) : null)
 const PEOPLE_PATHS = new Set(['/assigneeId', '/ownerUserId'])
@@ -40,28 +43,32 @@ export async function eventNames(workshopId: number, rows: NamedRow[]): Promise<
   const tests = await select<{ versionId: number }>('SELECT id, "versionId" FROM road_tests WHERE "workshopId" = :workshopId AND id IN (:ids)', roadTestIds)
   const testVersion = new Map(tests.map(t => [t.id, t.versionId]))
   tests.forEach(t => versionIds.add(t.versionId))
-  const [versions, people, snags] = await Promise.all([
+  const [versions, people, renames, titles] = await Promise.all([
     select<{ label: string }>(`SELECT pv.id, p.name || ' v' || pv."versionNo" AS label FROM profile_versions pv JOIN profiles p ON p.id = pv."profileId"
       WHERE pv."workshopId" = :workshopId AND pv.id IN (:ids)`, versionIds),
     select<{ name: string }>('SELECT id, name FROM users WHERE "workshopId" = :workshopId AND id IN (:ids)', userIds),
-    select<{ title: string }>('SELECT id, title FROM snags WHERE "workshopId" = :workshopId AND id IN (:ids)', snagIds)
+    personTimeline(workshopId, userIds),
+    snagTimeline(workshopId, snagIds)
   ])
   const versionName = new Map(versions.map(v => [v.id, v.label]))
   const personName = new Map(people.map(p => [p.id, p.name]))
-  const snagTitle = new Map(snags.map(s => [s.id, s.title]))
   const versionOf = (id: number | null) => (id === null ? undefined : versionName.get(id))
   return rows.map((r) => {
     const own = idOf(r.entityId)
     const testId = r.entityType === 'road-test' ? own : idOf(r.data.roadTestId)
     const version = r.entityType === 'version' ? versionOf(own) : versionOf(idOf(r.data.versionId)) ?? versionOf(testId === null ? null : testVersion.get(testId) ?? null)
-    const names: EventNames = { people: Object.fromEntries(peopleIn(r).filter(id => personName.has(id)).map(id => [String(id), personName.get(id)!])) }
+    const at = BigInt(r.id)
+    const personThen = (id: number) => nameAt(renames, id, at, personName.get(id))
+    const names: EventNames = { people: Object.fromEntries(peopleIn(r).flatMap(id => (personThen(id) ? [[String(id), personThen(id)!]] : []))) }
     if (version) names.version = version
     const parent = versionOf(idOf(r.data.parentVersionId))
     if (parent) names.parentVersion = parent
     const superseded = versionOf(idOf(r.data.supersededVersionId))
     if (superseded) names.supersededVersion = superseded
-    if (r.entityType === 'user' && own !== null && personName.has(own)) names.person = personName.get(own)
-    if (r.entityType === 'snag' && own !== null && snagTitle.has(own)) names.snag = snagTitle.get(own)
+    const person = r.entityType === 'user' && own !== null ? personThen(own) : undefined
+    if (person) names.person = person
+    const snag = r.entityType === 'snag' && own !== null ? nameAt(titles, own, at, undefined) : undefined
+    if (snag) names.snag = snag
     return names
   })
 }
