@@ -89,6 +89,8 @@ export interface SearchItem {
   profileName: string
   versionId: number
   versionNo: number
+  // The last read-back of the controller differed from this version (drift), since then.
+  driftedAt: string | null
   warnings: string[]
   values: Record<string, number | string | null>
 }

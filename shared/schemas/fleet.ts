@@ -21,6 +21,8 @@ export interface RecheckCar {
   versionId: number
   versionNo: number
   profileName: string
+  // Drift: the last read-back of the car's controller differed from what was signed off, since then.
+  driftedAt: Date | string | null
   newWarnings: RecheckWarning[]
 }
 

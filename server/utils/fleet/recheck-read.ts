@@ -7,7 +7,7 @@ interface RunRow { id: number, state: RecheckView['state'], reason: RecheckView[
 
 export async function worseCars(recheckId: number, limit: number, transaction?: Transaction): Promise<RecheckCar[]> {
   return useDatabase().query<RecheckCar>(
-    `SELECT i."vehicleId", v."stockRef", v.make, v.model, v.year, i."versionId", pv."versionNo", p.name AS "profileName", i."newWarnings"
+    `SELECT i."vehicleId", v."stockRef", v.make, v.model, v.year, v."driftedAt", i."versionId", pv."versionNo", p.name AS "profileName", i."newWarnings"
        FROM fleet_recheck_items i JOIN vehicles v ON v.id = i."vehicleId" JOIN profile_versions pv ON pv.id = i."versionId" JOIN profiles p ON p.id = pv."profileId"
       WHERE i."recheckId" = :recheckId AND i."worstRank" > 0
       ORDER BY i."worstRank" DESC, i."newWarningCount" DESC, v."stockRef" LIMIT :limit`,

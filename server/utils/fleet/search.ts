@@ -22,7 +22,7 @@ function decode(s: string, numeric: boolean): Cursor {
   throw cursor400()
 }
 
-interface Row { total: string, profileId: number | null, vehicleId: number, stockRef: string, make: string, model: string, year: number, status: string, driveUnit: string, profileName: string, versionId: number, versionNo: number, warnings: string[], sortKey: string, [value: string]: unknown }
+interface Row { total: string, profileId: number | null, vehicleId: number, stockRef: string, make: string, model: string, year: number, status: string, driveUnit: string, profileName: string, versionId: number, versionNo: number, driftedAt: Date | null, warnings: string[], sortKey: string, [value: string]: unknown }
 
 export async function searchFleet(user: SignedIn, q: SearchRequest): Promise<SearchAnswer> {
   await unitSettingsOf(user, q.conditions.map(c => c.field)) // a setting named within a unit must be one of its number settings
@@ -54,7 +54,7 @@ export async function searchFleet(user: SignedIn, q: SearchRequest): Promise<Sea
      SELECT c.total, page.*, page.k::text AS "sortKey", x.*
        FROM (SELECT count(*) AS total FROM m) c LEFT JOIN page ON true
        -- Each page row looked up by its keys (LIMIT 1 keeps the planner from scanning whole tables to join a page).
-       LEFT JOIN LATERAL (SELECT v."stockRef", v.make, v.model, v.year, v.status, pl.name AS "driveUnit", p.name AS "profileName", pv."versionNo"
+       LEFT JOIN LATERAL (SELECT v."stockRef", v.make, v.model, v.year, v.status, v."driftedAt", pl.name AS "driveUnit", p.name AS "profileName", pv."versionNo"
          FROM vehicles v JOIN platforms pl ON pl.id = v."platformId" JOIN profiles p ON p.id = page."profileId" JOIN profile_versions pv ON pv.id = page."versionId"
         WHERE v.id = page."vehicleId" LIMIT 1) x ON true
       ORDER BY page.k ${dir}, page."profileId" ${dir}`, replacements)
@@ -63,7 +63,7 @@ export async function searchFleet(user: SignedIn, q: SearchRequest): Promise<Sea
   const page = found.slice(0, q.limit)
   const items: SearchItem[] = page.map(r => ({
     vehicleId: r.vehicleId, stockRef: r.stockRef, make: r.make, model: r.model, year: r.year, status: r.status, driveUnit: r.driveUnit,
-    profileName: r.profileName, versionId: r.versionId, versionNo: r.versionNo, warnings: r.warnings,
+    profileName: r.profileName, versionId: r.versionId, versionNo: r.versionNo, driftedAt: r.driftedAt ? new Date(r.driftedAt).toISOString() : null, warnings: r.warnings,
     values: Object.fromEntries(shown.map((f, i) => [f, r[`v${i}`] as number | string | null]))
   }))
   const last = page.at(-1)
