@@ -8,7 +8,7 @@ export async function personTimeline(workshopId: number, ids: Set<number>): Prom
   if (!ids.size) return new Map()
   const rows = await selectRows<{ id: string, entityId: string, before: string, after: string | null }>(
     `SELECT id, "entityId", data->'before'->>'name' AS before, COALESCE(data->>'name', data->'after'->>'name') AS after FROM audit_events
-      WHERE "workshopId" = :workshopId AND "entityType" = 'user' AND "entityId" IN (:ids) AND data->'before'->>'name' IS NOT NULL ORDER BY id`,
+      WHERE "workshopId" = :workshopId AND "entityType" = 'user' AND "entityId" = ANY(:ids::text[]) AND data->'before'->>'name' IS NOT NULL ORDER BY id`,
     { workshopId, ids: [...ids].map(String) })
   return group(rows.map(r => ({ record: Number(r.entityId), from: BigInt(r.id), name: r.after, before: r.before })))
 }
@@ -19,7 +19,7 @@ export async function snagTimeline(workshopId: number, ids: Set<number>): Promis
   const rows = await selectRows<{ id: string, entityId: string, title: string | null }>(
     `SELECT id, "entityId", COALESCE(data->'after'->>'title', CASE WHEN jsonb_typeof(data->'patch') = 'array' THEN
         (SELECT o->>'value' FROM jsonb_array_elements(data->'patch') o WHERE o->>'path' = '/title' AND o->>'op' IN ('add', 'replace') LIMIT 1) END) AS title
-       FROM audit_events WHERE "workshopId" = :workshopId AND "entityType" = 'snag' AND "entityId" IN (:ids) AND action IN ('snag.created', 'snag.updated') ORDER BY id`,
+       FROM audit_events WHERE "workshopId" = :workshopId AND "entityType" = 'snag' AND "entityId" = ANY(:ids::text[]) AND action IN ('snag.created', 'snag.updated') ORDER BY id`,
     { workshopId, ids: [...ids].map(String) })
   return group(rows.map(r => ({ record: Number(r.entityId), from: BigInt(r.id), name: r.title, before: undefined })))
 }
