@@ -17,7 +17,7 @@ export function latestVersion<V extends Pick<VersionSummary, 'versionNo' | 'stat
 }
 
 // Review and sign-off go to someone other than the version's author (docs/version-lifecycle.md).
-const notTheAuthor = (role: string, author: PersonRef | null) => (author ? `${role} other than ${author.name}` : role)
+const notTheAuthor = (role: string, author: PersonRef | null, me: Viewer) => (author ? `${role} other than ${author.id === me.id ? 'you' : author.name}` : role)
 
 // The step a profile waits on, read from its latest version; none once it is signed off or superseded.
 function profileStep(p: ProfileView, me: Viewer): WaitingItem | null {
@@ -26,8 +26,8 @@ function profileStep(p: ProfileView, me: Viewer): WaitingItem | null {
   const name = `${p.name} v${v.versionNo}`
   const page = `/versions/${v.id}`
   const mineAsAuthor = v.author !== null && v.author.id === me.id
-  if (v.state === 'in-review') return { who: notTheAuthor('an engineer', v.author), what: `review ${name}`, to: page, mine: me.can('versions.review') && !mineAsAuthor }
-  if (v.state === 'approved') return { who: notTheAuthor('a road tester', v.author), what: `road-test ${name}`, to: `/road-tests/new?version=${v.id}`, mine: me.can('road-tests.record') && !mineAsAuthor }
+  if (v.state === 'in-review') return { who: notTheAuthor('an engineer', v.author, me), what: `review ${name}`, to: page, mine: me.can('versions.review') && !mineAsAuthor }
+  if (v.state === 'approved') return { who: notTheAuthor('a road tester', v.author, me), what: `road-test ${name}`, to: `/road-tests/new?version=${v.id}`, mine: me.can('road-tests.record') && !mineAsAuthor }
   const author = v.author?.name ?? 'its author'
   const mine = mineAsAuthor && me.can('versions.write')
   if (v.state === 'draft') return { who: author, what: `finish the draft ${name} and send it for review`, to: page, mine }

@@ -47,6 +47,7 @@ describe('what waits on whom for a car', () => {
   it('never gives the author the review or road test of their own version', () => {
     const lead = as(dev.id, 'tuner', 'engineer', 'tester')
     expect(carWaiting(car, profiles, [], lead).some(w => w.mine)).toBe(false)
+    expect(said(carWaiting(car, profiles, [], lead))).toEqual(['a road tester other than you: road-test Road v2', 'an engineer other than you: review Track v1'])
     // Another engineer who is also a tester has both steps as theirs.
     expect(said(carWaiting(car, profiles, [], as(40, 'engineer', 'tester')))).toEqual(['mine: road-test Road v2', 'mine: review Track v1'])
   })
