@@ -60,9 +60,11 @@ export const HANDOVER_CAUTIONS = [
   'Have the brakes, tyres and high-voltage system inspected at the intervals your workshop recommends, and straight away after any warning light, fault or collision.'
 ]
 
-// What the owner is told of faults and repairs still open on the car, by the most pressing one's priority.
-export function openWorkAdvice(priorities: string[]): string {
+// What the owner is told of faults and repairs still open on the car, by the most pressing one's priority;
+// before handover the car is still with the workshop, which finishes them first.
+export function openWorkAdvice(priorities: string[], beforeHandover = false): string {
   if (!priorities.length) return 'None: the workshop has no fault or repair open on this car.'
+  if (beforeHandover) return 'The workshop deals with these before it hands the car over, or agrees them with you first.'
   if (priorities.includes('urgent')) return 'At least one of these is urgent: do not drive the car until the workshop tells you it has been put right.'
   if (priorities.includes('high')) return 'Ask the workshop whether the car may be driven before these are done.'
   return 'The workshop will arrange these with you.'

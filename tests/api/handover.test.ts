@@ -1,6 +1,6 @@
 import { execFileSync } from 'node:child_process'
 import { describe, it, expect } from 'vitest'
-import { useRunningServer, signIn, baseUrl } from './helpers'
+import { useRunningServer, signIn, baseUrl, withDatabase } from './helpers'
 import { pdfText } from './pdf'
 import { approvedVersion, newCar, newClient, newProfile, recordRoadTest } from './road-test-fixtures'
 
@@ -88,8 +88,14 @@ describe('handover sheet', async () => {
     expect(text).toContain('Work still open on the car')
     expect(text).toMatch(/Front caliper drags\s+Conversion fault/)
     expect(text).toContain('do not drive the car')
-    const view = await client.call('GET', `/api/vehicles/${car.id}/client-view`)
-    expect(view.body.openWork.map((o: { title: string, priority: string }) => `${o.title}: ${o.priority}`)).toEqual(['Front caliper drags: Urgent', 'Wiper slow on the second speed: Normal'])
-    expect(view.body.openWorkAdvice).toContain('do not drive the car')
+    // The owner's own page says the same once the car is theirs; before that the workshop still has it.
+    const view = async (status: string) => {
+      await withDatabase(c => c.query('UPDATE vehicles SET status = $1 WHERE id = $2', [status, car.id]))
+      return (await client.call('GET', `/api/vehicles/${car.id}/client-view`)).body
+    }
+    const atWorkshop = await view('snagging')
+    expect(atWorkshop.openWork.map((o: { title: string, priority: string }) => `${o.title}: ${o.priority}`)).toEqual(['Front caliper drags: Urgent', 'Wiper slow on the second speed: Normal'])
+    expect(atWorkshop.openWorkAdvice).toContain('before it hands the car over')
+    expect((await view('handed-over')).openWorkAdvice).toContain('do not drive the car')
   })
 })

@@ -31,7 +31,7 @@ export async function clientCarView(vehicle: Vehicle): Promise<ClientCarView> {
     roadTest: test ? { testedAt: test.testedAt.toISOString(), verdict: test.verdict, surface: test.conditions?.surface ?? '' } : null,
     enhancements: enhancements.map(s => ({ id: s.id, title: s.title, detail: s.detail, status: s.status })),
     openWork: work.map(s => ({ id: s.id, title: s.title, priority: snagPriorityLabels[s.priority as SnagPriority] })),
-    openWorkAdvice: openWorkAdvice(work.map(s => s.priority)),
+    openWorkAdvice: openWorkAdvice(work.map(s => s.priority), vehicle.status !== 'handed-over'),
     handoverPdf: `/api/vehicles/${vehicle.id}/handover.pdf`,
     drift: vehicle.driftedAt ? { since: vehicle.driftedAt.toISOString() } : null
   }
