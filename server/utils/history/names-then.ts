@@ -13,14 +13,14 @@ export async function personTimeline(workshopId: number, ids: Set<number>): Prom
   return group(rows.map(r => ({ record: Number(r.entityId), from: BigInt(r.id), name: r.after, before: r.before })))
 }
 
-// Snags: the title raised with, then each change of title.
-export async function snagTimeline(workshopId: number, ids: Set<number>): Promise<NameTimeline> {
+// Snags: the title raised with, then each change of title, up to the newest event being named.
+export async function snagTimeline(workshopId: number, ids: Set<number>, upTo: bigint): Promise<NameTimeline> {
   if (!ids.size) return new Map()
   const rows = await selectRows<{ id: string, entityId: string, title: string | null }>(
     `SELECT id, "entityId", COALESCE(data->'after'->>'title', CASE WHEN jsonb_typeof(data->'patch') = 'array' THEN
         (SELECT o->>'value' FROM jsonb_array_elements(data->'patch') o WHERE o->>'path' = '/title' AND o->>'op' IN ('add', 'replace') LIMIT 1) END) AS title
-       FROM audit_events WHERE "workshopId" = :workshopId AND "entityType" = 'snag' AND "entityId" = ANY(:ids::text[]) AND action IN ('snag.created', 'snag.updated') ORDER BY id`,
-    { workshopId, ids: [...ids].map(String) })
+       FROM audit_events WHERE "workshopId" = :workshopId AND "entityType" = 'snag' AND "entityId" = ANY(:ids::text[]) AND action IN ('snag.created', 'snag.updated') AND id <= :upTo ORDER BY id`,
+    { workshopId, ids: [...ids].map(String), upTo: String(upTo) })
   return group(rows.map(r => ({ record: Number(r.entityId), from: BigInt(r.id), name: r.title, before: undefined })))
 }
 

@@ -48,7 +48,7 @@ export async function eventNames(workshopId: number, rows: NamedRow[]): Promise<
       WHERE pv."workshopId" = :workshopId AND pv.id IN (:ids)`, versionIds),
     select<{ name: string }>('SELECT id, name FROM users WHERE "workshopId" = :workshopId AND id IN (:ids)', userIds),
     personTimeline(workshopId, userIds),
-    snagTimeline(workshopId, snagIds)
+    snagTimeline(workshopId, snagIds, rows.reduce((m, r) => (BigInt(r.id) > m ? BigInt(r.id) : m), 0n))
   ])
   const versionName = new Map(versions.map(v => [v.id, v.label]))
   const personName = new Map(people.map(p => [p.id, p.name]))
