@@ -8,7 +8,7 @@ import type { VersionView } from '~~/shared/schemas/profile-views'
 
 export interface RoadTestBrief {
   version: { id: number, versionNo: number, state: string, authorId: number, parameters: SettingValues }
-  profile: { id: number, name: string }
+  profile: { id: number, name: string, onCarVersionNo: number | null } // the signed-off version to go back to, if any
   vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null, spec: VehicleSpec }
   platform: PlatformLike
   platformSchema: Record<string, unknown> | null

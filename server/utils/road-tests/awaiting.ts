@@ -30,9 +30,11 @@ export async function awaitingRoadTests(user: SignedIn): Promise<{ items: Awaiti
 export async function roadTestBrief(user: SignedIn, versionId: number) {
   const { version, profile, vehicle } = await findTestedVersion(user, versionId)
   const { figures, warnings, roles } = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(user.workshopId))
+  // The way back at the roadside: the profile's signed-off version, if it has one other than this.
+  const onCar = profile.onCarVersionId && profile.onCarVersionId !== version.id ? await ProfileVersion.findByPk(profile.onCarVersionId, { attributes: ['versionNo'] }) : null
   return {
     version: { id: version.id, versionNo: version.versionNo, state: version.state, authorId: version.authorId, parameters: version.parameters },
-    profile: { id: profile.id, name: profile.name },
+    profile: { id: profile.id, name: profile.name, onCarVersionNo: onCar?.versionNo ?? null },
     vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null, spec: vehicle.spec },
     // The drive unit as the browser's evaluation needs it, so a roadside change shows its warnings as it is typed.
     platform: { key: vehicle.platform!.key, name: vehicle.platform!.name, motorMaxRpm: vehicle.platform!.motorMaxRpm, schema: vehicle.platform!.schema },
