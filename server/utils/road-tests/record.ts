@@ -1,6 +1,6 @@
 // Recording and reading road tests of approved versions (docs/architecture.md#road-test).
 import { Op, type Transaction } from 'sequelize'
-import { Attachment, Platform, Profile, ProfileVersion, RoadTest, TelemetryLog, User, Vehicle } from '../../models'
+import { Attachment, Platform, Profile, ProfileVersion, RoadTest, Snag, TelemetryLog, User, Vehicle } from '../../models'
 import type { RoadTestCheck } from '../../models/road-test'
 import type { SignedIn } from '../guards/guards'
 import { isStaff } from '../../../shared/schemas/roles'
@@ -104,13 +104,14 @@ export function attachmentView(a: Attachment): AttachmentView {
 
 export async function readRoadTest(user: SignedIn, id: number): Promise<RoadTestView> {
   const rt = await findRoadTest(user, id)
-  const [version, vehicle, tester, logs, photos, roadside] = await Promise.all([
+  const [version, vehicle, tester, logs, photos, roadside, snags] = await Promise.all([
     ProfileVersion.findByPk(rt.versionId, { include: [{ model: Profile, as: 'profile' }] }),
     Vehicle.findByPk(rt.vehicleId),
     User.findByPk(rt.testerId, { attributes: ['id', 'name'] }),
     TelemetryLog.findAll({ where: { roadTestId: rt.id }, order: [['id', 'ASC']] }),
     Attachment.findAll({ where: { ownerType: 'road-test', ownerId: rt.id, workshopId: user.workshopId }, order: [['id', 'ASC']] }),
-    ProfileVersion.findAll({ where: { roadTestId: rt.id }, attributes: ['id', 'versionNo', 'state'], order: [['versionNo', 'ASC']] })
+    ProfileVersion.findAll({ where: { roadTestId: rt.id }, attributes: ['id', 'versionNo', 'state'], order: [['versionNo', 'ASC']] }),
+    Snag.findAll({ where: { roadTestId: rt.id, workshopId: user.workshopId }, attributes: ['id', 'title', 'kind', 'status', 'blocking'], order: [['id', 'ASC']] })
   ])
   const files = await Attachment.findAll({ where: { id: { [Op.in]: logs.map(l => l.attachmentId) } } })
   return {
@@ -122,7 +123,8 @@ export async function readRoadTest(user: SignedIn, id: number): Promise<RoadTest
     checkList: rt.checkList ?? [], verdict: rt.verdict, preDrive: rt.preDrive ?? null, signed: rt.signed ?? null,
     telemetry: logs.map(l => ({ id: l.id, attachment: attachmentView(files.find(f => f.id === l.attachmentId)!), summary: l.summary as never, createdAt: new Date(l.createdAt).toISOString() })),
     photos: photos.map(attachmentView),
-    roadsideVersions: roadside.map(v => ({ id: v.id, versionNo: v.versionNo, state: v.state }))
+    roadsideVersions: roadside.map(v => ({ id: v.id, versionNo: v.versionNo, state: v.state })),
+    snags: snags.map(n => ({ id: n.id, title: n.title, kind: n.kind, status: n.status, blocking: n.blocking }))
   }
 }
 
