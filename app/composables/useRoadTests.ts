@@ -15,6 +15,8 @@ export interface RoadTestBrief {
   expected: { maxStartGradePct: number | null, creepHoldGradePct: number | null, liftOffDecelMs2: number | null, brakeRegenDecelMs2: number | null, topSpeedKph: number | null, zeroTo50S: number | null, regenGripLimitMs2: { dry: number | null, wet: number | null, snow: number | null }, derateStartC?: { motor: number | null, inverter: number | null, battery: number | null } }
   warnings: { rule: string, severity: Severity, message: string }[]
   extraChecks: WorkshopCheck[]
+  failedEarlier: { id: number, testedAt: string } | null // the latest failed road test of this version
+  blockingSnags: { id: number, title: string }[] // the car's open blocking snags: a sign-off waits for them
 }
 
 export interface SignOffMissing { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }
