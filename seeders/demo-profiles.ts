@@ -41,7 +41,7 @@ export const demoProfiles: DemoProfile[] = [
     versions: [{
       author: tuner, daysAgo: 1, state: 'draft',
       parameters: { powerCapKw: 75, torqueCapNm: 240, liftOffRegenPct: 20 },
-      rationale: 'First cut for the estate: a little under the original engine\'s power, gentle lift-off regen while the pack is being fitted.'
+      rationale: 'First cut for the estate: a little over the original engine\'s power (about 1.1 times), gentle lift-off regen while the pack is being fitted.'
     }]
   },
   {

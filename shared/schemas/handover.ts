@@ -21,6 +21,8 @@ export interface HandoverProfile {
   people: HandoverPerson[]
 }
 
+export interface OpenWork { title: string, kind: string, priority: string }
+
 export interface HandoverSheet {
   workshop: string
   generatedAt: string
@@ -28,6 +30,8 @@ export interface HandoverSheet {
   carFacts: HandoverLine[]
   profiles: HandoverProfile[]
   enhancements: { title: string, detail: string, priority: string }[]
+  openWork: OpenWork[] // faults and repairs the workshop has not finished: the owner is told of them
+  openWorkAdvice: string
   cautions: string[]
   notice: string | null // the controller was found drifted: said before anything else
 }
@@ -55,3 +59,13 @@ export const HANDOVER_CAUTIONS = [
   'Do not change the controller settings yourself. Any change should be made, reviewed and road-tested by a qualified engineer, and recorded as a new version on the register.',
   'Have the brakes, tyres and high-voltage system inspected at the intervals your workshop recommends, and straight away after any warning light, fault or collision.'
 ]
+
+// What the owner is told of faults and repairs still open on the car, by the most pressing one's priority;
+// before handover the car is still with the workshop, which finishes them first.
+export function openWorkAdvice(priorities: string[], beforeHandover = false): string {
+  if (!priorities.length) return 'None: the workshop has no fault or repair open on this car.'
+  if (beforeHandover) return 'The workshop deals with these before it hands the car over, or agrees them with you first.'
+  if (priorities.includes('urgent')) return 'At least one of these is urgent: do not drive the car until the workshop tells you it has been put right.'
+  if (priorities.includes('high')) return 'Ask the workshop whether the car may be driven before these are done.'
+  return 'The workshop will arrange these with you.'
+}

@@ -26,7 +26,7 @@ export const versionCreateSchema = z.object({
 export type VersionCreate = z.output<typeof versionCreateSchema>
 
 export const versionUpdateSchema = z.object({
-  lockVersion: z.number({ error: 'The lockVersion you loaded is needed' }).int().min(0),
+  lockVersion: z.number({ error: 'Reload the version: which one you loaded is needed to save it' }).int().min(0),
   parameters: parametersSchema.optional(),
   rationale: rationale.optional()
 }).strict()

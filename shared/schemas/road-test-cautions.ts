@@ -21,10 +21,10 @@ export interface PreDriveRecord { confirmed: true, cautions: string[] }
 
 export const preDriveRecord = (): PreDriveRecord => ({ confirmed: true, cautions: preDriveCautions.map(c => c.title) })
 
-// "Tessa Quill read the pre-drive cautions (Two people, a quiet road; ...) and confirmed the car was ready."
+// "Tessa Quill read the pre-drive cautions (“Two people, a quiet road”, ...) and confirmed the car was ready."
 export function preDriveText(record: unknown, who: string): string {
   const r = record as Partial<PreDriveRecord> | null | undefined
   if (!r?.confirmed) return 'No pre-drive confirmation is on this record: it was recorded before Voltwright asked for one.'
-  const list = Array.isArray(r.cautions) && r.cautions.length ? ` (${r.cautions.map(String).join('; ')})` : ''
+  const list = Array.isArray(r.cautions) && r.cautions.length ? ` (${r.cautions.map(c => `“${String(c)}”`).join(', ')})` : ''
   return `${who || 'The tester'} read the pre-drive cautions${list} and confirmed the car was ready to set off.`
 }

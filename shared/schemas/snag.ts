@@ -15,6 +15,9 @@ export const snagKindLabels: Record<SnagKind, string> = {
 }
 export const snagPriorityLabels: Record<SnagPriority, string> = { low: 'Low', normal: 'Normal', high: 'High', urgent: 'Urgent' }
 export const snagStatusLabels: Record<SnagStatus, string> = { 'open': 'Open', 'in-hand': 'In hand', 'done': 'Done', 'declined': 'Declined' }
+// Most pressing first (urgent … low); a stable sort keeps the order within a priority.
+export const mostPressingFirst = <T extends { priority: string }>(list: T[]): T[] =>
+  [...list].sort((a, b) => snagPriorities.indexOf(b.priority as SnagPriority) - snagPriorities.indexOf(a.priority as SnagPriority))
 // Open and in hand both still need doing.
 export const unresolvedSnagStatuses: SnagStatus[] = ['open', 'in-hand']
 

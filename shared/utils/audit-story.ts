@@ -104,17 +104,19 @@ const told = new Set(['versionNo', 'profileName', 'profile', 'parentVersionNo', 
   'passwordChanged', 'name', 'after', 'result', 'recheckId', 'verdict', 'checks', 'parameters', 'patchFromParent', 'filename', 'matches', 'stockRef', 'make', 'model', 'year', 'signed',
   'kitName', 'baselineVersionNo'])
 
-// "Regen against grip, snow (2 × danger); Stop lamps and regen (UN R13-H) (caution)": one rule's warnings once.
+// "Regen against grip, snow (2 × danger and caution); Stop lamps and regen (UN R13-H) (caution)": one rule's
+// warnings once, the worst first.
+const worst = ['danger', 'caution', 'info']
 function warningsText(list: Data[]): string {
   const byRule = new Map<string, string[]>()
   for (const w of list) byRule.set(String(w.rule), [...(byRule.get(String(w.rule)) ?? []), String(w.severity)])
   return [...byRule].map(([rule, severities]) => {
-    const counts = [...new Set(severities)].map((s) => {
+    const counts = [...new Set(severities)].sort((a, b) => worst.indexOf(a) - worst.indexOf(b)).map((s) => {
       const n = severities.filter(x => x === s).length
       const word = s === 'info' ? 'note' : s
       return n > 1 ? `${n} × ${word}` : word
     })
-    return `${ruleTitles[rule as keyof typeof ruleTitles]?.title ?? wordsOf(rule)} (${counts.join(', ')})`
+    return `${ruleTitles[rule as keyof typeof ruleTitles]?.title ?? wordsOf(rule)} (${counts.length > 1 ? `${counts.slice(0, -1).join(', ')} and ${counts.at(-1)}` : counts[0]})`
   }).join('; ')
 }
 

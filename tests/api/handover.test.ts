@@ -1,6 +1,6 @@
 import { execFileSync } from 'node:child_process'
 import { describe, it, expect } from 'vitest'
-import { useRunningServer, signIn, baseUrl } from './helpers'
+import { useRunningServer, signIn, baseUrl, withDatabase } from './helpers'
 import { pdfText } from './pdf'
 import { approvedVersion, newCar, newClient, newProfile, recordRoadTest } from './road-test-fixtures'
 
@@ -67,5 +67,35 @@ describe('handover sheet', async () => {
     expect(sheet.body.profiles[0].roadTest.verdict).toBe('pass')
     expect(sheet.body.enhancements.map((e: { title: string }) => e.title)).toEqual(['Offer a second charging cable'])
     expect(sheet.body.cautions.length).toBeGreaterThanOrEqual(3)
+    expect(sheet.body.openWork).toEqual([])
+    expect(sheet.body.openWorkAdvice).toMatch(/^None/)
+  })
+
+  it('tells the owner of faults and repairs still open, the most pressing first, and whether to drive', async () => {
+    const raise = (title: string, kind: string, priority: string) => tester.call('POST', `/api/vehicles/${car.id}/snags`, { kind, title, priority })
+    expect((await raise('Wiper slow on the second speed', 'remedial', 'normal')).status).toBe(201)
+    let sheet = await client.call('GET', `/api/vehicles/${car.id}/handover`)
+    expect(sheet.body.openWork.map((o: { title: string }) => o.title)).toEqual(['Wiper slow on the second speed'])
+    expect(sheet.body.openWorkAdvice).not.toContain('do not drive')
+    expect((await raise('Front caliper drags', 'conversion', 'urgent')).status).toBe(201)
+    sheet = await client.call('GET', `/api/vehicles/${car.id}/handover`)
+    expect(sheet.body.openWork).toEqual([
+      { title: 'Front caliper drags', kind: 'Conversion fault', priority: 'Urgent' },
+      { title: 'Wiper slow on the second speed', kind: 'Remedial work on the car', priority: 'Normal' }
+    ])
+    expect(sheet.body.openWorkAdvice).toContain('do not drive the car')
+    const text = pdfText(Buffer.from(await (await get(client, `/api/vehicles/${car.id}/handover.pdf`)).arrayBuffer()))
+    expect(text).toContain('Work still open on the car')
+    expect(text).toMatch(/Front caliper drags\s+Conversion fault/)
+    expect(text).toContain('do not drive the car')
+    // The owner's own page says the same once the car is theirs; before that the workshop still has it.
+    const view = async (status: string) => {
+      await withDatabase(c => c.query('UPDATE vehicles SET status = $1 WHERE id = $2', [status, car.id]))
+      return (await client.call('GET', `/api/vehicles/${car.id}/client-view`)).body
+    }
+    const atWorkshop = await view('snagging')
+    expect(atWorkshop.openWork.map((o: { title: string, priority: string }) => `${o.title}: ${o.priority}`)).toEqual(['Front caliper drags: Urgent', 'Wiper slow on the second speed: Normal'])
+    expect(atWorkshop.openWorkAdvice).toContain('before it hands the car over')
+    expect((await view('handed-over')).openWorkAdvice).toContain('do not drive the car')
   })
 })

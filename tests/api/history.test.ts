@@ -81,6 +81,9 @@ describe('a car\'s history', async () => {
     expect(rows[1]!['changes (before → after)']).toContain('Kerb mass (converted), kg: 1,050 → 1,075')
     expect(rows[0]!.by).toBe('Maud Ellery')
     expect(rows[0]!.hash).toMatch(/^[0-9a-f]{64}$/)
+    // The written time is the same moment as the ISO one, in UTC as its heading says, whatever the server's zone.
+    const t = new Date(rows[0]!['time (UTC)']!)
+    expect(rows[0]!['when (UTC)']).toMatch(new RegExp(`^${t.getUTCDate()} \\w+ ${t.getUTCFullYear()}, ${String(t.getUTCHours()).padStart(2, '0')}:${String(t.getUTCMinutes()).padStart(2, '0')}$`))
   })
 
   it('is for staff and auditors: the owner, another workshop and the signed-out are kept out', async () => {

@@ -35,7 +35,7 @@ describe('a road test\'s pre-drive confirmation and what it found', async () => 
     const event = await withDatabase(c => c.query('SELECT data FROM audit_events WHERE action = $1 AND "entityId" = $2', ['road-test.recorded', String(id)]))
     expect(event.rows[0].data.preDrive).toEqual({ confirmed: true, cautions: titles })
     const csv = (await auditor.call('GET', `/api/vehicles/${car.id}/history.csv`)).body as string
-    expect(csv).toContain(`Before setting off: Sol Brannagh read the pre-drive cautions (${titles.join('; ')}) and confirmed the car was ready to set off.`)
+    expect(csv).toContain(`Before setting off: Sol Brannagh read the pre-drive cautions (${titles.map(t => `“${t}”`).join(', ')}) and confirmed the car was ready to set off.`)
   })
 
   it('lists the snags a failed road test raised, and its sign-off refusal names the checks as testers know them', async () => {

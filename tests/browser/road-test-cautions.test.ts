@@ -60,7 +60,7 @@ describe('a road test begins with the cautions, and its steps read as words', as
     await recordLiftOff(page, 'gentle')
     await passTheRestAndSave(page)
     const confirmed = page.locator('[data-pre-drive-record]')
-    await expect.poll(() => confirmed.textContent()).toContain('Sol Brannagh read the pre-drive cautions (Two people, a quiet road;')
+    await expect.poll(() => confirmed.textContent()).toContain('Sol Brannagh read the pre-drive cautions (“Two people, a quiet road”,')
     expect(await page.locator('[data-road-test-stage]').textContent()).toBe('Not signed off yet')
     expect(internalNameIn(await page.locator('main').innerText())).toBeUndefined()
     expect(await sideways(page)).toBe(0)

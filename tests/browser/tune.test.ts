@@ -76,6 +76,18 @@ describe('trying settings on a car', async () => {
     await expect.poll(() => page.locator('#param-powerCapKw').inputValue()).toBe('40')
   })
 
+  it('on a wide screen the results panel says while more of it lies below, until it is scrolled to its end', async () => {
+    await page.goto(tryUrl, { waitUntil: 'networkidle' })
+    const panel = page.getByRole('region', { name: 'What these settings do to this car' })
+    const cue = page.locator('[data-more-below]')
+    await expect.poll(() => cue.isVisible()).toBe(true)
+    expect(await panel.evaluate(el => el.scrollHeight > el.clientHeight)).toBe(true) // it is taller than the window
+    await panel.evaluate((el) => { el.scrollTop = el.scrollHeight })
+    await expect.poll(() => cue.count()).toBe(0)
+    await panel.evaluate((el) => { el.scrollTop = 0 })
+    await expect.poll(() => cue.isVisible()).toBe(true)
+  })
+
   it('works under the product\'s content security policy, which forbids eval', async () => {
     const strict = await context.newPage()
     await strict.addInitScript(() => {

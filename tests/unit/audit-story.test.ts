@@ -123,7 +123,10 @@ describe('the history in the workshop\'s words', () => {
 
   it('lists one rule\'s two warnings once, with how many of each severity', () => {
     const sent = eventStory(entryOf('version.submitted', { entityType: 'version', data: { versionNo: 1, dangerCount: 2, warnings: [{ rule: 'regen-grip-snow', severity: 'danger' }, { rule: 'regen-grip-snow', severity: 'danger' }, { rule: 'regen-grip-snow', severity: 'caution' }, { rule: 'stop-lamp', severity: 'caution' }] }, names: { version: 'Road v1' } }))
-    expect(sent.facts.find(f => f.label === 'Warnings')!.value).toBe('Regen against grip, snow (2 × danger, caution); Stop lamps and regen (UN R13-H) (caution)')
+    expect(sent.facts.find(f => f.label === 'Warnings')!.value).toBe('Regen against grip, snow (2 × danger and caution); Stop lamps and regen (UN R13-H) (caution)')
+    // The worst first, whatever order the checks wrote them in.
+    const mixed = eventStory(entryOf('version.submitted', { entityType: 'version', data: { versionNo: 1, warnings: [{ rule: 'regen-grip-snow', severity: 'info' }, { rule: 'regen-grip-snow', severity: 'caution' }, { rule: 'regen-grip-snow', severity: 'danger' }] }, names: { version: 'Road v1' } }))
+    expect(mixed.facts.find(f => f.label === 'Warnings')!.value).toBe('Regen against grip, snow (danger, caution and note)')
   })
 
   it('lists a drafted version\'s settings and a check\'s measurements in the drive unit\'s and the check\'s own order', () => {

@@ -37,14 +37,14 @@ describe('the cautions before a road test sets off', () => {
   })
 
   it('tells the confirmation in words, and says plainly when a record has none', () => {
-    expect(preDriveText(preDriveRecord(), 'Tessa Quill')).toBe(`Tessa Quill read the pre-drive cautions (${preDriveCautions.map(c => c.title).join('; ')}) and confirmed the car was ready to set off.`)
+    expect(preDriveText(preDriveRecord(), 'Tessa Quill')).toBe(`Tessa Quill read the pre-drive cautions (${preDriveCautions.map(c => `“${c.title}”`).join(', ')}) and confirmed the car was ready to set off.`)
     expect(preDriveText(null, 'Tessa Quill')).toMatch(/^No pre-drive confirmation is on this record/)
   })
 
   it('shows in the history as a fact in words beside the road test', () => {
     const story = eventStory(entryOf('road-test.recorded', samples['road-test.recorded']!))
     const fact = story.facts.find(f => f.label === 'Before setting off')
-    expect(fact?.value).toMatch(/^Sol Brannagh read the pre-drive cautions \(Two people, a quiet road; Brakes first, regen off;/)
+    expect(fact?.value).toMatch(/^Sol Brannagh read the pre-drive cautions \(“Two people, a quiet road”, “Brakes first, regen off”,/)
     expect(internalNameIn(`${fact?.label} ${fact?.value}`)).toBeUndefined()
   })
 })

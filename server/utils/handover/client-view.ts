@@ -3,11 +3,13 @@ import { RoadTest, Snag, Workshop, type Vehicle } from '../../models'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
 import { describeSettings } from '../../../shared/utils/plain-words'
 import type { ClientCarView } from '../../../shared/schemas/client-view'
+import { mostPressingFirst, snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
+import { openWorkAdvice } from '../../../shared/schemas/handover'
 import { onCarProfiles } from '../fleet/readbacks'
 import { defaultSettings, evaluate, workshopSettingsSchema } from '../../../shared/compute'
 
 // What a car's owner sees: the car, what its controller is set to in plain words, how the road test went and
-// what the workshop offers next. No people, notes, evaluations or internal snags.
+// what is still to do, and what the workshop offers next. No people, notes or evaluations; open faults by title.
 export async function clientCarView(vehicle: Vehicle): Promise<ClientCarView> {
   const [profiles, workshop] = await Promise.all([onCarProfiles(vehicle.id), Workshop.findByPk(vehicle.workshopId, { attributes: ['settings'] })])
   // Parsed here rather than through utils/evaluation, which brings the server-only schema compiler along.
@@ -20,12 +22,16 @@ export async function clientCarView(vehicle: Vehicle): Promise<ClientCarView> {
   const test = profiles.length
     ? await RoadTest.findOne({ where: { vehicleId: vehicle.id, versionId: { [Op.in]: profiles.map(p => p.versionId) } }, order: [['testedAt', 'DESC']] })
     : null
-  const enhancements = await Snag.findAll({ where: { vehicleId: vehicle.id, kind: 'enhancement', status: { [Op.in]: ['open', 'in-hand'] } }, order: [['id', 'ASC']] })
+  const open = await Snag.findAll({ where: { vehicleId: vehicle.id, status: { [Op.in]: unresolvedSnagStatuses } }, order: [['id', 'ASC']] })
+  const enhancements = open.filter(s => s.kind === 'enhancement')
+  const work = mostPressingFirst(open.filter(s => s.kind !== 'enhancement'))
   return {
     car: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, registration: vehicle.registration, status: vehicle.status, statusLabel: vehicleStatusLabels[vehicle.status as VehicleStatus] },
     onCar,
     roadTest: test ? { testedAt: test.testedAt.toISOString(), verdict: test.verdict, surface: test.conditions?.surface ?? '' } : null,
     enhancements: enhancements.map(s => ({ id: s.id, title: s.title, detail: s.detail, status: s.status })),
+    openWork: work.map(s => ({ id: s.id, title: s.title, priority: snagPriorityLabels[s.priority as SnagPriority] })),
+    openWorkAdvice: openWorkAdvice(work.map(s => s.priority), vehicle.status !== 'handed-over'),
     handoverPdf: `/api/vehicles/${vehicle.id}/handover.pdf`,
     drift: vehicle.driftedAt ? { since: vehicle.driftedAt.toISOString() } : null
   }

@@ -2,12 +2,12 @@ import type { RecordedCheck } from '../../../shared/schemas/workshop-checks'
 // Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
 import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
-import { driftNotice, handoverCautions, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
+import { driftNotice, handoverCautions, openWorkAdvice, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
 import { checkTitles } from '../../../shared/schemas/road-test-checks'
 import { measuredValues } from '../../../shared/utils/check-measures'
 import { formatDate } from '../../../shared/utils/dates'
-import { snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
+import { mostPressingFirst, snagKindLabels, snagPriorityLabels, unresolvedSnagStatuses, type SnagKind, type SnagPriority } from '../../../shared/schemas/snag'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
 import type { TelemetrySummary } from '../../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './words'
@@ -75,10 +75,13 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
   const onCar = profiles.filter(p => p.onCarVersionId)
   if (!onCar.length) throw createError({ statusCode: 409, message: 'No profile has been signed off for this car yet: the handover sheet follows sign-off.' })
   const versions = await ProfileVersion.findAll({ where: { id: onCar.map(p => p.onCarVersionId!) } })
-  const [workshop, enhancements] = await Promise.all([
+  const [workshop, open] = await Promise.all([
     Workshop.findByPk(vehicle.workshopId, { attributes: ['name'] }),
-    Snag.findAll({ where: { vehicleId: vehicle.id, kind: 'enhancement', status: unresolvedSnagStatuses }, order: [['id', 'ASC']] })
+    Snag.findAll({ where: { vehicleId: vehicle.id, status: unresolvedSnagStatuses }, order: [['id', 'ASC']] })
   ])
+  const enhancements = open.filter(s => s.kind === 'enhancement')
+  // Faults and repairs, most pressing first: the owner is told what is still to do and whether to drive.
+  const work = mostPressingFirst(open.filter(s => s.kind !== 'enhancement'))
   const owner = (vehicle as Vehicle & { owner?: User | null }).owner
   return {
     workshop: workshop?.name ?? '', generatedAt: new Date().toISOString(),
@@ -86,6 +89,8 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
     carFacts: carFactLines(vehicle.spec, vehicle.platform?.name ?? ''),
     profiles: await Promise.all(onCar.map(p => profileSheet(vehicle, p, versions.find(v => v.id === p.onCarVersionId)!))),
     enhancements: enhancements.map(s => ({ title: s.title, detail: s.detail, priority: snagPriorityLabels[s.priority as SnagPriority] })),
+    openWork: work.map(s => ({ title: s.title, kind: snagKindLabels[s.kind as SnagKind], priority: snagPriorityLabels[s.priority as SnagPriority] })),
+    openWorkAdvice: openWorkAdvice(work.map(s => s.priority)),
     cautions: handoverCautions(vehicle.spec.drivenAxle),
     notice: vehicle.driftedAt ? driftNotice(formatDate(vehicle.driftedAt, { timeZone: 'UTC' })) : null
   }

@@ -5,6 +5,7 @@ import type { HandoverLine } from '../../../shared/schemas/handover'
 import type { VehicleSpec } from '../../../shared/schemas/vehicle-spec'
 import { localeNumber } from '../../../shared/utils/number-format'
 import { hoursText } from '../../../shared/utils/dates'
+import { figureNumber } from '../../../shared/utils/figure-digits'
 
 const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : localeNumber(x, { maximumFractionDigits: digits })
 // Decelerations keep two decimals, as the trade compares them (0.50 m/s², not 0.5).
@@ -45,9 +46,9 @@ export function figureLines(e: Evaluation, spec: VehicleSpec): HandoverLine[] {
     { label: '0–50 km/h (0–31 mph)', value: f.zeroTo50S === null ? '—' : `${n(f.zeroTo50S, 1)} s` },
     { label: '0–100 km/h (0–62 mph)', value: f.zeroTo100S === null ? 'not reached' : `${n(f.zeroTo100S, 1)} s` },
     { label: 'Top speed', value: kph(f.topSpeedKph), note: f.topSpeedLimitedBy ? `Limited by ${limited[f.topSpeedLimitedBy] ?? f.topSpeedLimitedBy}.` : undefined },
-    { label: 'Steepest hill it can start on', value: f.maxStartGradePct === null ? '—' : `${n(f.maxStartGradePct)} % (1 in ${n(100 / Math.max(f.maxStartGradePct, 0.1))})`, note: f.startGradeLimitedBy === 'traction' ? 'Limited by grip on a dry road.' : 'Limited by the motor\'s torque.' },
+    { label: 'Steepest hill it can start on', value: f.maxStartGradePct === null ? '—' : `${figureNumber(f.maxStartGradePct, '%')} % (1 in ${n(100 / Math.max(f.maxStartGradePct, 0.1))})`, note: f.startGradeLimitedBy === 'traction' ? 'Limited by grip on a dry road.' : 'Limited by the motor\'s torque.' },
     { label: 'Lift-off slowing at 50 km/h', value: f.liftOffDecelMs2 === null ? '—' : ms2(f.liftOffDecelMs2) },
-    { label: 'Power against the original engine', value: f.powerRatioToOriginal === null ? '—' : `${n(f.powerRatioToOriginal, 2)} × the original ${n(spec.originalEnginePowerKw)} kW` },
+    { label: 'Power against the original engine', value: f.powerRatioToOriginal === null ? '—' : `${figureNumber(f.powerRatioToOriginal, '×')} × the original ${n(spec.originalEnginePowerKw)} kW` },
     { label: 'Charging from 10 % to 80 %', value: f.chargeTime10to80H === null ? '—' : `about ${hoursText(f.chargeTime10to80H)} on a ${n(spec.chargerPowerKw, 1)} kW charger` }
   ]
 }

@@ -6,7 +6,7 @@ import { formatDateTime } from '../../../shared/utils/dates'
 import { walkHistory, type HistoryScope } from './read'
 import { csvLine } from './csv'
 
-const COLUMNS = ['event', 'time (UTC)', 'when', 'car', 'action', 'what happened', 'entity', 'by', 'changes (before → after)', 'details', 'previous hash', 'hash']
+const COLUMNS = ['event', 'time (UTC)', 'when (UTC)', 'car', 'action', 'what happened', 'entity', 'by', 'changes (before → after)', 'details', 'previous hash', 'hash']
 
 // The same words as the screen (shared/utils/audit-story.ts), with the codes and hashes in columns of their own.
 export function entryCells(e: HistoryEntry): string[] {
@@ -14,7 +14,7 @@ export function entryCells(e: HistoryEntry): string[] {
   // A record's creation has no "before": it reads as what it was recorded with, as on the screen.
   const changes = story.changes.map(c => story.created ? `${c.label}: ${c.after}` : `${c.label}: ${c.before ?? '(not recorded)'} → ${c.after}`).join('; ')
   const details = [...story.facts.map(f => `${f.label}: ${f.value}`), ...story.checks.map(c => `${c.title}: ${c.verdict.toLowerCase()}${c.measured ? `, ${c.measured}` : ''}`)].join('; ')
-  return [e.id, e.createdAt, formatDateTime(e.createdAt), e.vehicle?.stockRef ?? '', e.action, story.sentence, `${e.entityType} ${e.entityId}`,
+  return [e.id, e.createdAt, formatDateTime(e.createdAt, { timeZone: 'UTC' }), e.vehicle?.stockRef ?? '', e.action, story.sentence, `${e.entityType} ${e.entityId}`,
     e.actor?.name ?? 'Voltwright', changes, details, e.prevHash ?? '', e.hash]
 }
 

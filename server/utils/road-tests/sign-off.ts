@@ -10,6 +10,7 @@ import type { VersionState } from '../../../shared/schemas/version'
 import { failedPeopleRules, personRefusal, stateAfter, stateRefusal, versionLifecycle, type PersonRule } from '../../../shared/schemas/version-lifecycle'
 import type { VehicleStatus } from '../../../shared/schemas/vehicle'
 import { canonicalJson } from '../../../shared/utils/canonical-json'
+import { formatDateTime } from '../../../shared/utils/dates'
 import { roadTestRecordContent } from '../../../shared/utils/road-test-record'
 import { useDatabase } from '../database/db'
 import { clearDrift } from '../fleet/readbacks'
@@ -36,7 +37,7 @@ const personCodes: Record<PersonRule, string> = { 'driver': 'not-the-tester', 'n
 
 async function whatIsMissing(user: SignedIn, rt: RoadTest, version: ProfileVersion, transaction: Transaction): Promise<MissingForSignOff[]> {
   const missing: MissingForSignOff[] = []
-  if (rt.signed) missing.push({ code: 'already-signed', message: `This road test was already signed off on ${new Date(rt.signed.at).toISOString().slice(0, 16).replace('T', ' ')}.` })
+  if (rt.signed) missing.push({ code: 'already-signed', message: `This road test was already signed off on ${formatDateTime(rt.signed.at, { timeZone: 'UTC' })} UTC.` })
   const notApproved = stateRefusal('sign-off', version.state as VersionState, version.versionNo)
   if (notApproved) missing.push({ code: 'version-not-approved', message: notApproved })
   const failed = failedPeopleRules('sign-off', { roles: user.roles, isAuthor: version.authorId === user.id, isDriver: rt.testerId === user.id })
