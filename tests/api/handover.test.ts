@@ -86,7 +86,7 @@ describe('handover sheet', async () => {
     expect(sheet.body.openWorkAdvice).toContain('do not drive the car')
     const text = pdfText(Buffer.from(await (await get(client, `/api/vehicles/${car.id}/handover.pdf`)).arrayBuffer()))
     expect(text).toContain('Work still open on the car')
-    expect(text).toMatch(/Front caliper drags\s+Conversion fault/)
+    expect(text).toMatch(/Conversion fault\s+Front caliper drags/)
     expect(text).toContain('do not drive the car')
     // The owner's own page says the same once the car is theirs; before that the workshop still has it.
     const view = async (status: string) => {

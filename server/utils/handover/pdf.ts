@@ -151,7 +151,7 @@ export async function renderHandoverPdf(s: HandoverSheet): Promise<Buffer> {
   for (const f of s.carFacts) w.row(f.label, f.value, f.note)
   for (const p of s.profiles) profile(w, p)
   w.section('Work still open on the car')
-  for (const o of s.openWork) w.row(o.title, o.kind, `Priority: ${o.priority}`)
+  for (const o of s.openWork) w.row(o.kind, o.title, `Priority: ${o.priority}`)
   w.text(s.openWorkAdvice, { size: 10, weight: s.openWork.length ? 'semibold' : 'regular' })
   w.section('Enhancements we can offer')
   if (!s.enhancements.length) w.text('None outstanding.', { size: 10 })
