@@ -1,6 +1,7 @@
 import { describe, it, expect, afterAll } from 'vitest'
 import type { Page } from 'playwright-core'
 import { launch, baseUrl, shot } from './helpers'
+import { tickReady } from './steps'
 import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
 import { newCar } from '../api/road-test-fixtures'
 import { internalNameIn } from '../unit/internal-names'
@@ -124,6 +125,7 @@ describe('every main page fits the screen, as each of its people sees it', async
       }
       await page.goto(`${baseUrl}/road-tests/new?version=${created.body.id}`, { waitUntil: 'networkidle' })
       await expect.poll(() => page.getByText(/not approved; the record cannot be saved/).count()).toBe(1)
+      await tickReady(page)
       await page.getByRole('button', { name: 'Start the checks' }).click()
       await page.locator('input[type=file]').setInputFiles({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') })
       await expect.poll(() => page.getByRole('alert').filter({ hasText: 'notes.txt was not added: only JPEG, PNG or WebP photos' }).count()).toBe(1)
