@@ -1,8 +1,8 @@
 import { describe, it, expect, afterAll } from 'vitest'
 import type { Page } from 'playwright-core'
-import { launch, shot, accessibilityProblems, baseUrl } from './helpers'
+import { launch, shot, accessibilityProblems, baseUrl, signInByApi } from './helpers'
 import { passTheRestAndSave, recordConditions, recordHillStart, recordLiftOff } from './steps'
-import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
+import { useRunningServer, signIn } from '../api/helpers'
 import { approvedVersion, newCar, newProfile, passingChecks, recordRoadTest } from '../api/road-test-fixtures'
 import { preDriveCautions, preDriveDeferral } from '../../shared/schemas/road-test-cautions'
 import { internalNameIn } from '../unit/internal-names'
@@ -21,7 +21,7 @@ describe('a road test begins with the cautions, and its steps read as words', as
   afterAll(() => context.close())
 
   it('shows the cautions, defers to the regulations and the engineer, and will not start the checks unticked', async () => {
-    await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tester@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+    await signInByApi(page, 'tester@voltwright.test')
     await page.goto(`${baseUrl}/road-tests/new?versionId=${versionId}`, { waitUntil: 'networkidle' })
     const caution = page.locator('[data-pre-drive]')
     await expect.poll(() => caution.getByRole('heading', { name: 'Caution: before you set off' }).count()).toBe(1)

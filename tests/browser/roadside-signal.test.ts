@@ -1,9 +1,9 @@
 import { describe, it, expect, afterAll, afterEach } from 'vitest'
 import type { Page } from 'playwright-core'
 import sharp from 'sharp'
-import { launch, baseUrl, shot } from './helpers'
+import { launch, baseUrl, shot, signInByApi } from './helpers'
 import { passTheRest, recordConditions, recordHillStart, recordLiftOff } from './steps'
-import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
+import { useRunningServer, signIn } from '../api/helpers'
 import { approvedVersion, newCar, newProfile, PLATFORM } from '../api/road-test-fixtures'
 
 const JS_BUDGET = 120 * 1024 // compressed JavaScript for the road-test page, as sent over the wire
@@ -56,7 +56,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
 
   it('loads the road-test page with less than 120 KiB of compressed JavaScript', async () => {
     const versionId = await approvedVersion(profileId)
-    await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tester@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+    await signInByApi(page, 'tester@voltwright.test')
     const sizes: Promise<number>[] = []
     const onFinished = (req: import('playwright-core').Request) => {
       if (req.resourceType() === 'script') sizes.push(req.sizes().then(s => s.responseBodySize))
@@ -153,7 +153,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     const versionId = await approvedVersion(profileId)
     const shared = await launch(390)
     try {
-      const signInAs = (email: string) => shared.page.request.post(`${baseUrl}/api/auth/login`, { data: { email, password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      const signInAs = (email: string) => signInByApi(shared.page, email)
       await signInAs('tester@voltwright.test')
       await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
       await recordConditions(shared.page, { surface: 'Wet', ambientC: '9', route: 'Left on the shared phone' })
