@@ -16,6 +16,7 @@ import * as roadTestIdempotency from './20261203-6001-road-test-idempotency'
 import * as driveUnitRoles from './20261203-4001-drive-unit-roles'
 import * as workshopChecks from './20261203-4003-workshop-checks'
 import * as fleetSearchColumns from './20261203-7101-fleet-search-columns'
+import * as roadTestPreDrive from './20261203-8101-road-test-pre-drive'
 
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
@@ -34,5 +35,6 @@ export const migrations = [
   { name: '20261203-6001-road-test-idempotency', ...roadTestIdempotency },
   { name: '20261203-4001-drive-unit-roles', ...driveUnitRoles },
   { name: '20261203-4003-workshop-checks', ...workshopChecks },
-  { name: '20261203-7101-fleet-search-columns', ...fleetSearchColumns }
+  { name: '20261203-7101-fleet-search-columns', ...fleetSearchColumns },
+  { name: '20261203-8101-road-test-pre-drive', ...roadTestPreDrive }
 ]

@@ -13,6 +13,8 @@ export interface RoadTestDraftState {
   checks: CheckDraft[]
   extras: ExtraCheckDraft[]
   verdict: string
+  // The tick under the pre-drive cautions: the record cannot be sent without it.
+  preDriveConfirmed: boolean
   step: number
   // Sent and not yet answered, or waiting for the connection: sent again when the page can.
   unsent: boolean
@@ -30,7 +32,7 @@ export function freshRoadTestDraft(keys: readonly string[], extraKeys: readonly 
     conditions: { surface: '', ambientC: null, route: '' },
     checks: keys.map(key => ({ key, verdict: '', values: {}, note: '', photos: [] })),
     extras: extraKeys.map(freshExtra),
-    verdict: '', step: 0, unsent: false, recordId: null
+    verdict: '', preDriveConfirmed: false, step: 0, unsent: false, recordId: null
   }
 }
 

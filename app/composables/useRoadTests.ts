@@ -8,13 +8,15 @@ import type { VersionView } from '~~/shared/schemas/profile-views'
 
 export interface RoadTestBrief {
   version: { id: number, versionNo: number, state: string, authorId: number, parameters: SettingValues }
-  profile: { id: number, name: string }
+  profile: { id: number, name: string, onCarVersionNo: number | null } // the signed-off version to go back to, if any
   vehicle: { id: number, stockRef: string, make: string, model: string, year: number, platformKey: string | null, spec: VehicleSpec }
   platform: PlatformLike
   platformSchema: Record<string, unknown> | null
   expected: { maxStartGradePct: number | null, creepHoldGradePct: number | null, liftOffDecelMs2: number | null, brakeRegenDecelMs2: number | null, topSpeedKph: number | null, zeroTo50S: number | null, regenGripLimitMs2: { dry: number | null, wet: number | null, snow: number | null }, derateStartC?: { motor: number | null, inverter: number | null, battery: number | null } }
   warnings: { rule: string, severity: Severity, message: string }[]
   extraChecks: WorkshopCheck[]
+  failedEarlier: { id: number, testedAt: string } | null // the latest failed road test of this version
+  blockingSnags: { id: number, title: string }[] // the car's open blocking snags: a sign-off waits for them
 }
 
 export interface SignOffMissing { code: string, message: string, check?: string, snags?: { id: number, title: string }[] }

@@ -1,4 +1,5 @@
 import type { RecordedCheck } from '../../shared/schemas/workshop-checks'
+import type { PreDriveRecord } from '../../shared/schemas/road-test-cautions'
 import { Model, DataTypes, type Sequelize, type InferAttributes, type InferCreationAttributes, type CreationOptional } from 'sequelize'
 
 export interface RoadTestCheck { key: string, verdict: 'pass' | 'fail' | 'not-tested', values: Record<string, number | string | null>, note: string }
@@ -16,6 +17,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
   declare checks: RoadTestCheck[]
   declare checkList: CreationOptional<RecordedCheck[]> // the workshop's own checks as they stood when recorded
   declare verdict: 'pass' | 'fail'
+  declare preDrive: CreationOptional<PreDriveRecord | null> // the tester's tick before setting off; none on older records
   declare signed: CreationOptional<RoadTestSignature | null>
   declare idempotencyKey: CreationOptional<string | null>
   declare createdAt: CreationOptional<Date>
@@ -33,6 +35,7 @@ export class RoadTest extends Model<InferAttributes<RoadTest>, InferCreationAttr
       checks: { type: DataTypes.JSONB, allowNull: false },
       checkList: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       verdict: { type: DataTypes.TEXT, allowNull: false },
+      preDrive: { type: DataTypes.JSONB, allowNull: true },
       signed: { type: DataTypes.JSONB, allowNull: true },
       idempotencyKey: { type: DataTypes.UUID, allowNull: true },
       createdAt: DataTypes.DATE,

@@ -4,6 +4,8 @@ import type { RecordedCheck } from './workshop-checks'
 import type { TelemetrySummary } from '../telemetry/summary'
 import type { TelemetrySeries } from '../telemetry/downsample'
 import type { VersionState } from './version'
+import type { PreDriveRecord } from './road-test-cautions'
+import type { SnagKind, SnagStatus } from './snag'
 
 // A mandatory check by its CheckKey, or one of the workshop's own by the key in the road test's checkList.
 export interface CheckView { key: string, verdict: CheckVerdict, values: Record<string, number | string | null>, note: string }
@@ -21,10 +23,13 @@ export interface RoadTestView {
   checks: CheckView[]
   checkList: RecordedCheck[]
   verdict: 'pass' | 'fail'
+  preDrive: PreDriveRecord | null // the tester's tick before setting off; none on records made before it was asked
   signed: { testerId: number, at: string, contentHash: string } | null
   telemetry: TelemetryView[]
   photos: AttachmentView[]
   roadsideVersions: { id: number, versionNo: number, state: string }[]
+  // What this road test found, as raised on the car's snag list.
+  snags: { id: number, title: string, kind: SnagKind, status: SnagStatus, blocking: boolean }[]
 }
 
 export interface RoadTestListItem {

@@ -75,6 +75,8 @@ export const roadTestCreateSchema = z.object({
   conditions: conditionsSchema,
   checks: z.array(z.union([roadTestCheckSchema, extraCheckResultSchema], { error: 'Not a check of this road test' })).max(72),
   verdict: z.enum(roadTestVerdicts, { error: 'Choose pass or fail' }),
+  // The tester's tick before setting off (docs/road-tests.md#before-you-set-off); the record keeps it in words.
+  preDriveConfirmed: z.literal(true, { error: 'Read the cautions and tick that the car is ready before you set off' }),
   testedAt: z.coerce.date().optional(),
   // Given by the phone when the record is begun, so a send repeated after a lost answer records it once.
   idempotencyKey: z.uuid({ error: 'A send key as the phone makes it' }).optional()

@@ -15,6 +15,7 @@ import { fitsText, type KitFit } from '../schemas/kit'
 import { auditorRows, isAuditorKey } from './audit-auditors'
 import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
 import { localeNumber } from './number-format'
+import { preDriveText } from '../schemas/road-test-cautions'
 
 export interface StoryRow { label: string, value: string }
 export interface StoryCheck { title: string, verdict: string, measured: string }
@@ -161,7 +162,8 @@ function factsOf(e: HistoryEntry, d: Data): StoryRow[] {
       // A fleet re-check's reason is a code: said in words, capitalised.
       const words = e.action === 'fleet.rechecked' && k === 'reason' ? recheckReasonLabels[v as RecheckReason] : undefined
       if (v !== '') add({ reason: 'Reason', comment: 'Comment', caption: 'Caption', rationale: 'Why' }[k], words ? `${words[0]!.toUpperCase()}${words.slice(1)}` : valueText(v))
-    } else if (k === 'source') add('Came in as', valueText(v, 'source'))
+    } else if (k === 'preDrive') add('Before setting off', preDriveText(v, e.actor?.name ?? ''))
+    else if (k === 'source') add('Came in as', valueText(v, 'source'))
     else if (k === 'readAt') add('Read from the controller', valueText(v))
     else if (k === 'origin') add('Made', valueText(v, 'origin'))
     else add(keyLabel(k), valueText(v, k))

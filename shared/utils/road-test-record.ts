@@ -11,6 +11,7 @@ export interface RoadTestRecordContent {
   checks: unknown
   checkList?: unknown // the workshop's own checks it was recorded with; left out when there were none, as before them
   verdict: string
+  preDrive?: unknown // the tester's pre-drive confirmation; left out on records made before it was asked
   telemetry: { summary: unknown, sha256: string | null }[]
   files: { id: number, sha256: string }[]
   signedAt: Date | string

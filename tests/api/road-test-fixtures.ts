@@ -69,7 +69,7 @@ export const passingChecks = () => [
 
 export const roadTestBody = (o: { checks?: unknown[], verdict?: string } = {}) => ({
   conditions: { surface: 'dry', ambientC: 14, route: 'Forge loop with Quarry Lane' },
-  checks: o.checks ?? passingChecks(), verdict: o.verdict ?? 'pass'
+  checks: o.checks ?? passingChecks(), verdict: o.verdict ?? 'pass', preDriveConfirmed: true
 })
 
 export async function recordRoadTest(tester: Caller, versionId: number, o: { checks?: unknown[], verdict?: string } = {}): Promise<number> {

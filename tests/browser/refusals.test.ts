@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest'
 import type { Page } from 'playwright-core'
-import { launch, baseUrl, shot } from './helpers'
-import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
+import { launch, baseUrl, shot, signInByApi } from './helpers'
+import { useRunningServer, signIn } from '../api/helpers'
 
 // What shows of a page with the parts folded away for auditors closed.
 const mainText = (page: Page) => page.locator('main').evaluate((main) => {
@@ -21,7 +21,7 @@ describe('a refusal in its person\'s words, and the hashes kept for the auditors
   it('turns a car\'s owner back to their cars from the workshop\'s pages, and says a car not theirs is not found', async () => {
     const { context, page } = await launch(390)
     try {
-      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'client@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      await signInByApi(page, 'client@voltwright.test')
       for (const path of ['/activity', `/cars/${handedOver}/history/print`, `/road-tests/${frontDriven}`]) {
         await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
         await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent(), path).toBe('A page for the workshop')
@@ -40,7 +40,7 @@ describe('a refusal in its person\'s words, and the hashes kept for the auditors
   it('shows a road test\'s values as the trade writes them, and its record hash only to whoever opens the part for auditors', async () => {
     const { context, page } = await launch(1280)
     try {
-      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'auditor@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      await signInByApi(page, 'auditor@voltwright.test')
       await page.goto(`${baseUrl}/road-tests/${wetTest}`, { waitUntil: 'networkidle' })
       await expect.poll(() => mainText(page)).toContain('Deceleration 0.80 m/s²')
       expect(await mainText(page)).not.toMatch(/if measured|[^\d]0\.5 m\/s²/)

@@ -1,9 +1,9 @@
 import { describe, it, expect, afterAll, afterEach } from 'vitest'
 import type { Page } from 'playwright-core'
 import sharp from 'sharp'
-import { launch, baseUrl, shot } from './helpers'
+import { launch, baseUrl, shot, signInByApi } from './helpers'
 import { passTheRest, recordConditions, recordHillStart, recordLiftOff } from './steps'
-import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
+import { useRunningServer, signIn } from '../api/helpers'
 import { approvedVersion, newCar, newProfile, PLATFORM } from '../api/road-test-fixtures'
 
 const JS_BUDGET = 120 * 1024 // compressed JavaScript for the road-test page, as sent over the wire
@@ -56,7 +56,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
 
   it('loads the road-test page with less than 120 KiB of compressed JavaScript', async () => {
     const versionId = await approvedVersion(profileId)
-    await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tester@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+    await signInByApi(page, 'tester@voltwright.test')
     const sizes: Promise<number>[] = []
     const onFinished = (req: import('playwright-core').Request) => {
       if (req.resourceType() === 'script') sizes.push(req.sizes().then(s => s.responseBodySize))
@@ -91,7 +91,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     await tab.getByRole('button', { name: 'Hill start' }).click()
     await expect.poll(() => tab.locator('[data-photos-unsent]').textContent()).toContain('hill-rollback.jpg')
     expect(await tab.locator('[data-photos-unsent]').textContent()).toContain('not sent yet, kept on this phone')
-    await tab.getByRole('button', { name: 'Verdict' }).click()
+    await tab.getByRole('button', { name: /^Verdict, step/ }).click()
     // No signal: the phone knows it is offline, and nothing it sends reaches the server. (Playwright's offline
     // emulation alone let a send through in two runs on a loaded machine, so the network is cut as well.)
     await context.route(`${baseUrl}/api/**`, route => route.abort('internetdisconnected'))
@@ -153,7 +153,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
     const versionId = await approvedVersion(profileId)
     const shared = await launch(390)
     try {
-      const signInAs = (email: string) => shared.page.request.post(`${baseUrl}/api/auth/login`, { data: { email, password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      const signInAs = (email: string) => signInByApi(shared.page, email)
       await signInAs('tester@voltwright.test')
       await shared.page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
       await recordConditions(shared.page, { surface: 'Wet', ambientC: '9', route: 'Left on the shared phone' })
@@ -201,7 +201,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
       const versionId = await approvedVersion(profileId)
       await page.goto(`${baseUrl}/road-tests/new?version=${versionId}`, { waitUntil: 'networkidle' })
       await fillTheWizard(page)
-      await page.getByRole('button', { name: 'Workshop checks', exact: true }).click()
+      await page.getByRole('button', { name: /^Workshop checks, step/ }).click()
       const hornBlock = page.locator(`[data-extra-check="${horn.key}"]`)
       await hornBlock.locator('label', { has: page.getByRole('radio', { name: 'Fail', exact: true }) }).click()
       await hornBlock.getByLabel('Note').fill('Weak, one of two horns silent')
@@ -212,7 +212,7 @@ describe('the road test at the roadside, with little or no signal', async () => 
       expect(await hornBlock.getByLabel('Note').inputValue()).toBe('Weak, one of two horns silent')
       expect(await page.locator(`#rt-extra-${volts.key}-value`).inputValue()).toBe('13.7')
       await shot(page, 'roadside-03-workshop-checks-kept')
-      await page.getByRole('button', { name: 'Verdict', exact: true }).click()
+      await page.getByRole('button', { name: /^Verdict, step/ }).click()
       await page.locator('label', { has: page.getByRole('radio', { name: 'Fail', exact: true }) }).click()
       await page.getByRole('button', { name: 'Save the road test' }).click()
       await page.waitForURL(u => /^\/road-tests\/\d+$/.test(u.pathname))

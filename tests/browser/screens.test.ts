@@ -1,7 +1,8 @@
 import { describe, it, expect, afterAll } from 'vitest'
 import type { Page } from 'playwright-core'
-import { launch, baseUrl, shot } from './helpers'
-import { useRunningServer, signIn, DEMO_PASSWORD } from '../api/helpers'
+import { launch, baseUrl, shot, signInByApi } from './helpers'
+import { tickReady } from './steps'
+import { useRunningServer, signIn } from '../api/helpers'
 import { newCar } from '../api/road-test-fixtures'
 import { internalNameIn } from '../unit/internal-names'
 
@@ -65,7 +66,7 @@ describe('every main page fits the screen, as each of its people sees it', async
 
       it.each(Object.keys(pages))('%s: no page scrolls sideways, no list hides columns on a phone, no page shows an internal name', async (email) => {
         await context.clearCookies()
-        const login = await page.request.post(`${baseUrl}/api/auth/login`, { data: { email, password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+        const login = await signInByApi(page, email)
         expect(login.ok()).toBe(true)
         const wide: string[] = []
         const named: string[] = []
@@ -86,7 +87,7 @@ describe('every main page fits the screen, as each of its people sees it', async
   it('reads the history in words: no field names, no JSON, no long decimals', async () => {
     const { context, page } = await launch(1280)
     try {
-      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'auditor@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      await signInByApi(page, 'auditor@voltwright.test')
       for (const path of ['/activity', `/cars/${car.id}/history`]) {
         await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
         await expect.poll(() => page.locator('main ol > li').count()).toBeGreaterThan(0)
@@ -116,7 +117,7 @@ describe('every main page fits the screen, as each of its people sees it', async
   it('says what is wrong with a road-test link, and why a photo is refused', async () => {
     const { context, page } = await launch(390)
     try {
-      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tester@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      await signInByApi(page, 'tester@voltwright.test')
       for (const [path, words] of [['/road-tests/new', 'does not say which version'], ['/road-tests/new?versionId=abc', 'does not exist'], ['/road-tests/new?versionId=999999', 'Back to the bench']] as const) {
         await page.goto(`${baseUrl}${path}`, { waitUntil: 'networkidle' })
         await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Nothing to road-test here' }).count(), path).toBe(1)
@@ -124,6 +125,7 @@ describe('every main page fits the screen, as each of its people sees it', async
       }
       await page.goto(`${baseUrl}/road-tests/new?version=${created.body.id}`, { waitUntil: 'networkidle' })
       await expect.poll(() => page.getByText(/not approved; the record cannot be saved/).count()).toBe(1)
+      await tickReady(page)
       await page.getByRole('button', { name: 'Start the checks' }).click()
       await page.locator('input[type=file]').setInputFiles({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') })
       await expect.poll(() => page.getByRole('alert').filter({ hasText: 'notes.txt was not added: only JPEG, PNG or WebP photos' }).count()).toBe(1)
@@ -136,7 +138,7 @@ describe('every main page fits the screen, as each of its people sees it', async
   it('opens a car on an overview that fits two screens, each part a tab of its own reachable by URL', async () => {
     const { context, page } = await launch(1280)
     try {
-      await page.request.post(`${baseUrl}/api/auth/login`, { data: { email: 'tuner@voltwright.test', password: DEMO_PASSWORD }, headers: { origin: baseUrl } })
+      await signInByApi(page, 'tuner@voltwright.test')
       const demo = (await tuner.call('GET', '/api/vehicles?q=OF-104')).body.items[0] as { id: number }
       await page.goto(`${baseUrl}/cars/${demo.id}`, { waitUntil: 'networkidle' })
       await expect.poll(() => page.locator('[data-on-car]').count()).toBeGreaterThan(0)

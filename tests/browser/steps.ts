@@ -1,6 +1,7 @@
 // Steps through the product's screens that more than one browser test takes, each as a person would.
 import { expect } from 'vitest'
 import type { Page } from 'playwright-core'
+import { preDriveConfirmLabel } from '../../shared/schemas/road-test-cautions'
 
 export const versionState = (page: Page) => page.locator('[data-state]').first().getAttribute('data-state')
 export const warningRules = (page: Page) => page.locator('[data-panel="warnings"] [data-rule]').evaluateAll(els => els.map(e => e.getAttribute('data-rule')))
@@ -42,7 +43,11 @@ export async function approve(page: Page, comment: string) {
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click()
 
 // The road-test wizard, screen by screen (it shows one check at a time, for a phone).
+// Before setting off: the cautions read and the car ready (the tick goes in the record).
+export const tickReady = (page: Page) => page.getByRole('checkbox', { name: preDriveConfirmLabel }).check()
+
 export async function recordConditions(page: Page, c: { surface: string, ambientC: string, route: string }) {
+  await tickReady(page)
   await page.getByText(c.surface, { exact: true }).click()
   await page.getByLabel(/Air temperature/).fill(c.ambientC)
   await page.getByLabel('Route').fill(c.route)

@@ -65,7 +65,7 @@ describe('a tuner proposes, an engineer reviews', async () => {
     await page.getByRole('link', { name: new RegExp(`${profileName} v2`) }).click()
     await page.getByRole('link', { name: /Compare with its parent, v1/ }).click()
     await page.waitForURL(/\/compare\//)
-    await expect.poll(() => page.locator('[data-parameter="liftOffRegenPct"]').textContent()).toMatch(/10\s*%.*25\s*%.*\+15\s*%.*\+150\s*%/)
+    await expect.poll(() => page.locator('[data-parameter="liftOffRegenPct"]').textContent()).toMatch(/10\s*%.*25\s*%.*\+15\s*points.*\+150\s*%/) // a percent setting moves by percentage points
     expect(await page.locator('[data-parameter]').count()).toBe(1)
     expect(await accessibilityProblems(page)).toEqual([])
     await shot(page, 'versions-06-compare')

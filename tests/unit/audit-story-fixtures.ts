@@ -1,6 +1,7 @@
 // One event per action the product writes, with the data its writer records (server/utils/**, seeders/**).
 import type { ChangeRow, EventNames, HistoryEntry } from '../../shared/schemas/history'
 import { changeRows, creationRows, eventDetails } from '../../shared/utils/audit-changes'
+import { preDriveRecord } from '../../shared/schemas/road-test-cautions'
 import { platforms } from '../../shared/platforms'
 
 const HASH = 'a'.repeat(64)
@@ -40,7 +41,7 @@ export const samples: Record<string, Sample> = {
   'version.approved': { entityType: 'version', data: { versionNo: 12, reviewId: 9, comment: 'Good; watch the inverter on the pull.', contentHash: HASH }, names: { version: 'Road v12' } },
   'version.rejected': { entityType: 'version', data: { versionNo: 12, reviewId: 10, comment: 'Too much lift-off regen for a wet winter.', contentHash: HASH }, names: { version: 'Road v12' } },
   'version.signed-off': { entityType: 'version', data: { roadTestId: 17, versionNo: 12, profileId: 3, profileName: 'Road', contentHash: HASH, versionContentHash: HASH, supersededVersionId: 39, vehicleStatus: { from: 'road-testing', to: 'snagging' }, unresolvedSnags: 3 }, names: { version: 'Road v12', supersededVersion: 'Road v11' } },
-  'road-test.recorded': { entityType: 'road-test', data: { versionId: 41, versionNo: 12, verdict: 'fail', conditions: { surface: 'wet', ambientC: 9, route: 'Forge loop, Quarry Lane (18 %)' }, checks }, names: { version: 'Road v12' } },
+  'road-test.recorded': { entityType: 'road-test', data: { versionId: 41, versionNo: 12, verdict: 'fail', conditions: { surface: 'wet', ambientC: 9, route: 'Forge loop, Quarry Lane (18 %)' }, checks, preDrive: preDriveRecord() }, names: { version: 'Road v12' } },
   'road-test.telemetry-uploaded': { entityType: 'road-test', data: { telemetryLogId: 5, attachmentId: 22, filename: 'forge-loop.csv', bytes: 2_345_678, sha256: HASH, summary }, names: { version: 'Road v12' } },
   'road-test.photo-added': { entityType: 'road-test', data: { attachmentId: 23, filename: 'hill.jpg', bytes: 345_678, sha256: HASH, caption: 'Quarry Lane', width: 4032, height: 3024 }, names: { version: 'Road v12' } },
   'snag.photo-added': { entityType: 'snag', data: { attachmentId: 24, filename: 'relay.jpg', bytes: 145_678, sha256: HASH, caption: '', width: 1600, height: 1200 }, names: { snag: 'Coolant pump relay chatters at idle' } },

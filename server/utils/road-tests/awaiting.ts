@@ -1,7 +1,8 @@
 // The tester's bench: approved versions awaiting a road test, oldest approval first.
 import { fn, col } from 'sequelize'
 import { checksFor } from '../workshop/checks'
-import { Profile, ProfileVersion, RoadTest, Vehicle } from '../../models'
+import { Profile, ProfileVersion, RoadTest, Snag, Vehicle } from '../../models'
+import { unresolvedSnagStatuses } from '../../../shared/schemas/snag'
 import type { SignedIn } from '../guards/guards'
 import type { AwaitingRoadTest } from '../../../shared/schemas/road-test-views'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
@@ -30,9 +31,16 @@ export async function awaitingRoadTests(user: SignedIn): Promise<{ items: Awaiti
 export async function roadTestBrief(user: SignedIn, versionId: number) {
   const { version, profile, vehicle } = await findTestedVersion(user, versionId)
   const { figures, warnings, roles } = evaluateOnServer(vehicle.spec, vehicle.platform!, version.parameters, await loadWorkshopSettings(user.workshopId))
+  // Before setting off: the way back (the profile's signed-off version, if other than this), an earlier failed
+  // road test of this version, and the blocking snags a sign-off would wait for.
+  const [onCar, failedEarlier, blocking] = await Promise.all([
+    profile.onCarVersionId && profile.onCarVersionId !== version.id ? ProfileVersion.findByPk(profile.onCarVersionId, { attributes: ['versionNo'] }) : null,
+    RoadTest.findOne({ where: { versionId: version.id, workshopId: user.workshopId, verdict: 'fail' }, attributes: ['id', 'testedAt'], order: [['testedAt', 'DESC'], ['id', 'DESC']] }),
+    Snag.findAll({ where: { vehicleId: vehicle.id, workshopId: user.workshopId, blocking: true, status: unresolvedSnagStatuses }, attributes: ['id', 'title'], order: [['id', 'ASC']] })
+  ])
   return {
     version: { id: version.id, versionNo: version.versionNo, state: version.state, authorId: version.authorId, parameters: version.parameters },
-    profile: { id: profile.id, name: profile.name },
+    profile: { id: profile.id, name: profile.name, onCarVersionNo: onCar?.versionNo ?? null },
     vehicle: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, platformKey: vehicle.platform?.key ?? null, spec: vehicle.spec },
     // The drive unit as the browser's evaluation needs it, so a roadside change shows its warnings as it is typed.
     platform: { key: vehicle.platform!.key, name: vehicle.platform!.name, motorMaxRpm: vehicle.platform!.motorMaxRpm, schema: vehicle.platform!.schema },
@@ -44,6 +52,8 @@ export async function roadTestBrief(user: SignedIn, versionId: number) {
       derateStartC: { motor: roles?.motorDerateStartC ?? null, inverter: roles?.inverterDerateStartC ?? null, battery: roles?.batteryDerateStartC ?? null }
     },
     warnings: warnings.map(w => ({ rule: w.rule, severity: w.severity, message: w.message })),
-    extraChecks: await checksFor(user.workshopId, vehicle.platform?.key ?? null)
+    extraChecks: await checksFor(user.workshopId, vehicle.platform?.key ?? null),
+    failedEarlier: failedEarlier ? { id: failedEarlier.id, testedAt: new Date(failedEarlier.testedAt).toISOString() } : null,
+    blockingSnags: blocking.map(b => ({ id: b.id, title: b.title }))
   }
 }

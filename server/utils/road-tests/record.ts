@@ -1,10 +1,11 @@
 // Recording and reading road tests of approved versions (docs/architecture.md#road-test).
 import { Op, type Transaction } from 'sequelize'
-import { Attachment, Platform, Profile, ProfileVersion, RoadTest, TelemetryLog, User, Vehicle } from '../../models'
+import { Attachment, Platform, Profile, ProfileVersion, RoadTest, Snag, TelemetryLog, User, Vehicle } from '../../models'
 import type { RoadTestCheck } from '../../models/road-test'
 import type { SignedIn } from '../guards/guards'
 import { isStaff } from '../../../shared/schemas/roles'
 import type { RoadTestCreate } from '../../../shared/schemas/road-test'
+import { preDriveRecord } from '../../../shared/schemas/road-test-cautions'
 import type { AttachmentView, RoadTestListItem, RoadTestView } from '../../../shared/schemas/road-test-views'
 import { useDatabase } from '../database/db'
 import { appendAuditEvent } from '../history/audit'
@@ -62,11 +63,12 @@ export async function recordRoadTest(user: SignedIn, versionId: number, input: R
   const defs = await checksFor(user.workshopId, vehicle.platform?.key ?? null)
   requireExtraChecks(defs, input.checks)
   let repeated = false
+  const preDrive = preDriveRecord()
   const id = await useDatabase().transaction(async (transaction) => {
     const rt = await RoadTest.create({
       workshopId: user.workshopId, vehicleId: vehicle.id, versionId: version.id, testerId: user.id, idempotencyKey: input.idempotencyKey ?? null,
       testedAt, conditions: input.conditions, checks: input.checks as RoadTestCheck[], verdict: input.verdict,
-      checkList: defs.map(recordedCheck)
+      checkList: defs.map(recordedCheck), preDrive
     }, { transaction })
     // A car on its first road test has moved on from the workshop floor.
     if (vehicle.status === 'intake' || vehicle.status === 'converting') {
@@ -75,7 +77,7 @@ export async function recordRoadTest(user: SignedIn, versionId: number, input: R
     }
     await appendAuditEvent(transaction, {
       workshopId: user.workshopId, vehicleId: vehicle.id, actorId: user.id, action: 'road-test.recorded', entityType: 'road-test', entityId: rt.id,
-      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict, values: c.values })) }
+      data: { versionId: version.id, versionNo: version.versionNo, verdict: input.verdict, conditions: input.conditions, checks: input.checks.map(c => ({ key: c.key, verdict: c.verdict, values: c.values })), preDrive }
     })
     return rt.id
   }).catch(async (e: Error) => {
@@ -102,13 +104,14 @@ export function attachmentView(a: Attachment): AttachmentView {
 
 export async function readRoadTest(user: SignedIn, id: number): Promise<RoadTestView> {
   const rt = await findRoadTest(user, id)
-  const [version, vehicle, tester, logs, photos, roadside] = await Promise.all([
+  const [version, vehicle, tester, logs, photos, roadside, snags] = await Promise.all([
     ProfileVersion.findByPk(rt.versionId, { include: [{ model: Profile, as: 'profile' }] }),
     Vehicle.findByPk(rt.vehicleId),
     User.findByPk(rt.testerId, { attributes: ['id', 'name'] }),
     TelemetryLog.findAll({ where: { roadTestId: rt.id }, order: [['id', 'ASC']] }),
     Attachment.findAll({ where: { ownerType: 'road-test', ownerId: rt.id, workshopId: user.workshopId }, order: [['id', 'ASC']] }),
-    ProfileVersion.findAll({ where: { roadTestId: rt.id }, attributes: ['id', 'versionNo', 'state'], order: [['versionNo', 'ASC']] })
+    ProfileVersion.findAll({ where: { roadTestId: rt.id }, attributes: ['id', 'versionNo', 'state'], order: [['versionNo', 'ASC']] }),
+    Snag.findAll({ where: { roadTestId: rt.id, workshopId: user.workshopId }, attributes: ['id', 'title', 'kind', 'status', 'blocking'], order: [['id', 'ASC']] })
   ])
   const files = await Attachment.findAll({ where: { id: { [Op.in]: logs.map(l => l.attachmentId) } } })
   return {
@@ -117,10 +120,11 @@ export async function readRoadTest(user: SignedIn, id: number): Promise<RoadTest
     vehicle: { id: vehicle!.id, stockRef: vehicle!.stockRef, make: vehicle!.make, model: vehicle!.model, year: vehicle!.year, status: vehicle!.status },
     tester: { id: tester?.id ?? rt.testerId, name: tester?.name ?? '' },
     testedAt: new Date(rt.testedAt).toISOString(), conditions: rt.conditions, checks: rt.checks as RoadTestView['checks'],
-    checkList: rt.checkList ?? [], verdict: rt.verdict, signed: rt.signed ?? null,
+    checkList: rt.checkList ?? [], verdict: rt.verdict, preDrive: rt.preDrive ?? null, signed: rt.signed ?? null,
     telemetry: logs.map(l => ({ id: l.id, attachment: attachmentView(files.find(f => f.id === l.attachmentId)!), summary: l.summary as never, createdAt: new Date(l.createdAt).toISOString() })),
     photos: photos.map(attachmentView),
-    roadsideVersions: roadside.map(v => ({ id: v.id, versionNo: v.versionNo, state: v.state }))
+    roadsideVersions: roadside.map(v => ({ id: v.id, versionNo: v.versionNo, state: v.state })),
+    snags: snags.map(n => ({ id: n.id, title: n.title, kind: n.kind, status: n.status, blocking: n.blocking }))
   }
 }
 

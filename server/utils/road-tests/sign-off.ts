@@ -4,6 +4,7 @@ import { Op, type Transaction } from 'sequelize'
 import { Attachment, Profile, ProfileVersion, RoadTest, Snag, TelemetryLog, User, Vehicle } from '../../models'
 import type { SignedIn } from '../guards/guards'
 import { mandatoryCheckKeys, checkVerdictLabels, type CheckVerdict } from '../../../shared/schemas/road-test'
+import { checkTitles } from '../../../shared/schemas/road-test-checks'
 import { unresolvedSnagStatuses } from '../../../shared/schemas/snag'
 import type { VersionState } from '../../../shared/schemas/version'
 import { failedPeopleRules, personRefusal, stateAfter, stateRefusal, versionLifecycle, type PersonRule } from '../../../shared/schemas/version-lifecycle'
@@ -26,7 +27,7 @@ export async function roadTestRecordHash(rt: RoadTest, version: ProfileVersion, 
   const files = await Attachment.findAll({ where: { workshopId: rt.workshopId, [Op.or]: [{ ownerType: 'road-test', ownerId: rt.id }, { id: logs.map(l => l.attachmentId) }] }, order: [['id', 'ASC']], transaction })
   return sha256Hex(canonicalJson(roadTestRecordContent({
     roadTestId: rt.id, vehicleId: rt.vehicleId, versionId: version.id, versionContentHash: version.contentHash, testerId: rt.testerId,
-    testedAt: rt.testedAt, conditions: rt.conditions, checks: rt.checks, verdict: rt.verdict, ...(rt.checkList?.length ? { checkList: rt.checkList } : {}),
+    testedAt: rt.testedAt, conditions: rt.conditions, checks: rt.checks, verdict: rt.verdict, ...(rt.checkList?.length ? { checkList: rt.checkList } : {}), ...(rt.preDrive ? { preDrive: rt.preDrive } : {}),
     telemetry: logs.map(l => ({ summary: l.summary, sha256: files.find(f => f.id === l.attachmentId)?.sha256 ?? null })),
     files: files.map(f => ({ id: f.id, sha256: f.sha256 })), signedAt
   })))
@@ -45,8 +46,8 @@ async function whatIsMissing(user: SignedIn, rt: RoadTest, version: ProfileVersi
   for (const key of mandatoryCheckKeys) {
     const check = rt.checks.find(c => c.key === key)
     if (check?.verdict === 'pass') continue
-    const state = check ? checkVerdictLabels[check.verdict as CheckVerdict].toLowerCase() : 'missing'
-    missing.push({ code: 'check-not-passed', check: key, message: `The ${key} check is ${state}.` })
+    const state = !check ? 'missing' : check.verdict === 'fail' ? 'failed' : checkVerdictLabels[check.verdict as CheckVerdict].toLowerCase()
+    missing.push({ code: 'check-not-passed', check: key, message: `The ${checkTitles[key].toLowerCase()} check is ${state}.` })
   }
   // Settings changed at the roadside during this drive are what the controller may now hold: the tested
   // version cannot go on the record as the car's until that change is sent back or withdrawn
