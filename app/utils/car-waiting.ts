@@ -53,6 +53,8 @@ function snagSteps(car: CarFacts, blocking: readonly BlockingSnag[], me: Viewer)
 
 export function carWaiting(car: CarFacts, profiles: ProfileView[], blocking: readonly BlockingSnag[], me: Viewer): WaitingItem[] {
   const items = profiles.map(p => profileStep(p, me)).filter((i): i is WaitingItem => i !== null)
+  // A car just booked in waits on a tuner to start its settings.
+  if (!profiles.some(p => p.versions.length)) items.push({ who: 'a tuner', what: 'start the car\'s first profile of controller settings', to: `/cars/${car.id}/versions`, mine: me.can('versions.write') })
   items.push(...snagSteps(car, blocking, me))
   if (car.driftedAt) items.push({ who: 'a tuner or tester', what: 'put the signed-off settings back on the controller and read it back', to: `/cars/${car.id}/readbacks`, mine: me.can('readbacks.record') })
   return [...items.filter(i => i.mine), ...items.filter(i => !i.mine)]

@@ -6,6 +6,10 @@ import { keyLabel } from './audit-values'
 
 const AUDITOR_KEY = /(Id|Hash)$|^(sha256|hash|lockVersion|because)$/
 export const isAuditorKey = (key: string) => AUDITOR_KEY.test(key)
+// A record number a change carries in its own fields ("/roadTestId" of a snag raised from a road test): the
+// auditors' to read. People's ids are not among them: the history names the person.
+export const recordNumberPath = (path: string) => /^\/[A-Za-z]+$/.test(path) && isAuditorKey(path.slice(1)) && !['/assigneeId', '/ownerUserId'].includes(path)
+export const auditorLabel = (key: string) => idLabels[key] ?? keyLabel(key)
 
 const idLabels: Record<string, string> = {
   versionId: 'Version record', profileId: 'Profile record', roadTestId: 'Road test record', reviewId: 'Review record',
@@ -25,7 +29,7 @@ export function auditorRows(e: HistoryEntry): { label: string, value: string }[]
   const signed = e.details.signed
   for (const [k, v] of Object.entries({ ...e.details, ...(signed && typeof signed === 'object' ? { signedContentHash: (signed as Record<string, unknown>).contentHash } : {}) })) {
     if (!isAuditorKey(k) || v === null || v === undefined || typeof v === 'object') continue
-    rows.push({ label: idLabels[k] ?? keyLabel(k), value: String(v) })
+    rows.push({ label: auditorLabel(k), value: String(v) })
   }
   rows.push({ label: 'Previous hash', value: e.prevHash ?? 'none (first event)' }, { label: 'Hash', value: e.hash })
   return rows

@@ -12,7 +12,7 @@ import { changePathLabel } from './audit-actions'
 import { bytesText, keyLabel, numberText, stageWords, unitOf, valueText, wordsOf } from './audit-values'
 import { knownChangeLabel, knownChangeRank } from './change-labels'
 import { fitsText, type KitFit } from '../schemas/kit'
-import { auditorRows, isAuditorKey } from './audit-auditors'
+import { auditorLabel, auditorRows, isAuditorKey, recordNumberPath } from './audit-auditors'
 import { recheckReasonLabels, type RecheckReason } from '../schemas/fleet'
 import { localeNumber } from './number-format'
 import { preDriveText } from '../schemas/road-test-cautions'
@@ -213,7 +213,7 @@ export function eventStory(e: HistoryEntry): EventStory {
     sentence: `${sentenceOf(e, d)}.`,
     facts: [...factsOf(e, d), ...(e.action === 'platform.created' ? platformSettings(e) : [])],
     checks: checksOf(d),
-    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path) && !(created && unsetCheckLimit(e, c.path, c.after)))
+    changes: e.changes.filter(c => !(e.action === 'platform.created' && c.path.startsWith('/schema')) && !codePath(e, c.path) && !recordNumberPath(c.path) && !(created && unsetCheckLimit(e, c.path, c.after)))
       .sort((a, b) => knownChangeRank(e.entityType, a.path) - knownChangeRank(e.entityType, b.path)).map(c => ({
       label: changePathLabel(c.path, e.entityType),
       before: c.beforeKnown ? changeValue(c.before, c.path) : null,
@@ -221,7 +221,8 @@ export function eventStory(e: HistoryEntry): EventStory {
       removed: c.op === 'remove'
     })),
     created,
-    auditors: [...auditorRows(e), ...e.changes.filter(c => codePath(e, c.path) && c.op !== 'remove').map(c => ({ label: 'Short code', value: String(c.after) }))]
+    auditors: [...auditorRows(e), ...e.changes.filter(c => codePath(e, c.path) && c.op !== 'remove').map(c => ({ label: 'Short code', value: String(c.after) })),
+      ...e.changes.filter(c => recordNumberPath(c.path) && c.after !== null && c.after !== undefined && !(c.path.slice(1) in e.details)).map(c => ({ label: auditorLabel(c.path.slice(1)), value: String(c.after) }))]
   }
 }
 

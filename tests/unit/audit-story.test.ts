@@ -171,6 +171,14 @@ describe('the history in the workshop\'s words', () => {
     expect(booked.auditors).toContainEqual({ label: 'Kit baseline version record', value: '9' })
   })
 
+  it('keeps the record number a snag raised from a road test carries for the auditors, out of its fields', () => {
+    const raised = eventStory(entryOf('snag.created', { entityType: 'snag', data: { after: { kind: 'conversion', title: 'Regen abrupt', priority: 'high', status: 'open', blocking: false, roadTestId: 5, assigneeId: 2 } }, names: { people: { 2: 'Sol Brannagh' } } }))
+    expect(raised.changes.map(c => c.label)).not.toContain('Road test id')
+    expect(raised.changes.some(c => /road test/i.test(c.label))).toBe(false)
+    expect(raised.changes.find(c => c.label === 'Assigned to')?.after).toBe('Sol Brannagh')
+    expect(raised.auditors).toContainEqual({ label: 'Road test record', value: '5' })
+  })
+
   it('reads each event as of its own time: what it recorded before any name looked up today', () => {
     // A snag raised open and retitled since: the raising names it as it was raised, with the stage it had then.
     const raised = entryOf('snag.created', { entityType: 'snag', data: { after: { kind: 'remedial', title: 'Wiper slow', priority: 'normal', status: 'open', blocking: true } }, names: { snag: 'Wiper motor replaced' } })

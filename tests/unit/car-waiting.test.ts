@@ -31,15 +31,16 @@ describe('what waits on whom for a car', () => {
   })
 
   it('gives a blocking snag to the person it is assigned to, and to nobody else', () => {
+    const signedOff = [profile(1, 'Road', [version(1, 1, 'signed-off')])]
     const snags = [{ assignee: ida }, { assignee: ida }, { assignee: dev }, { assignee: null }]
     // Ida sees her own two as her step; the tuner who may edit snags is not told they are his.
-    expect(said(carWaiting(car, [], snags, as(ida.id, 'tester')))).toEqual([
+    expect(said(carWaiting(car, signedOff, snags, as(ida.id, 'tester')))).toEqual([
       'mine: clear 2 snags that block sign-off', 'Dev Carrow: clear 1 snag that blocks sign-off', 'someone being assigned: clear 1 snag that blocks sign-off'
     ])
-    const tuner = carWaiting(car, [], snags, as(30, 'tuner', 'engineer', 'tester'))
+    const tuner = carWaiting(car, signedOff, snags, as(30, 'tuner', 'engineer', 'tester'))
     expect(tuner.some(w => w.mine)).toBe(false)
     expect(said(tuner)[0]).toBe('Ida Penrose: clear 2 snags that block sign-off')
-    expect(carWaiting(car, [], [{ assignee: null }], as(1, 'admin'))).toEqual([
+    expect(carWaiting(car, signedOff, [{ assignee: null }], as(1, 'admin'))).toEqual([
       { who: 'someone being assigned', what: 'clear 1 snag that blocks sign-off', to: '/cars/9/snags', mine: false }
     ])
   })
@@ -64,6 +65,12 @@ describe('what waits on whom for a car', () => {
     // Signed off at the last: nothing waits, however many earlier versions were sent back.
     const done = [profile(1, 'Road', [version(1, 1, 'rejected'), version(2, 2, 'signed-off')])]
     expect(carWaiting(car, done, [], as(dev.id, 'tuner'))).toEqual([])
+  })
+
+  it('a car just booked in, with no settings yet, waits on a tuner to start them', () => {
+    expect(said(carWaiting(car, [], [], as(3, 'tuner')))).toEqual(['mine: start the car\'s first profile of controller settings'])
+    expect(said(carWaiting(car, [profile(1, 'Road', [])], [], as(21, 'engineer')))).toEqual(['a tuner: start the car\'s first profile of controller settings'])
+    expect(carWaiting(car, profiles, [], as(3, 'tuner')).some(w => w.what.includes('first profile'))).toBe(false)
   })
 
   it('lets the version before a withdrawn one stand', () => {
