@@ -1,16 +1,13 @@
 // How the tune sheet shows numbers: a few figures, the unit always beside, kW with hp, km/h with mph on request.
 import { kphToMph, kwToHp, STANDARD_GRAVITY } from '~~/shared/compute/units'
 import type { WorkshopSettings } from '~~/shared/compute/settings'
-import { localeNumber } from '~~/shared/utils/number-format'
+import { formatFigure } from '~~/shared/utils/figure-digits'
 
 export type UnitPreference = WorkshopSettings['units']
 
 export const defaultUnits: UnitPreference = { power: 'kW+hp', speed: 'km/h' }
 
-export function formatFigure(x: number | null | undefined, decimals = 1): string {
-  if (x === null || x === undefined || !Number.isFinite(x)) return '—'
-  return localeNumber(x, { minimumFractionDigits: decimals, maximumFractionDigits: decimals })
-}
+export { formatFigure }
 
 export function powerText(kw: number | null | undefined, units: UnitPreference = defaultUnits): string {
   if (kw === null || kw === undefined || !Number.isFinite(kw)) return '—'

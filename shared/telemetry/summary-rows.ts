@@ -1,17 +1,16 @@
 // A log's summary as the tester reads it: one row per figure, rounded, with its unit.
 import { kwToHp } from '../compute/units'
 import type { TelemetrySummary } from './summary'
-import { localeNumber } from '../utils/number-format'
+import { formatFigure } from '../utils/figure-digits'
 
-const f = (x: number | null | undefined, d = 1) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : localeNumber(x, { maximumFractionDigits: d, minimumFractionDigits: d }))
-const withUnit = (x: number | null | undefined, d: number, unit: string) => (x === null || x === undefined ? '—' : `${f(x, d)} ${unit}`)
+const withUnit = (x: number | null | undefined, d: number, unit: string) => (x === null || x === undefined ? '—' : `${formatFigure(x, d)} ${unit}`)
 
 export function summaryRows(s: Partial<TelemetrySummary>): { label: string, value: string }[] {
   return [
-    { label: 'Samples', value: f(s.samples, 0) },
+    { label: 'Samples', value: formatFigure(s.samples, 0) },
     { label: 'Duration', value: withUnit(s.durationS === undefined ? undefined : s.durationS / 60, 1, 'min') },
     { label: 'Peak speed', value: withUnit(s.peakSpeedKph, 0, 'km/h') },
-    { label: 'Peak battery power', value: s.peakPowerKw === null || s.peakPowerKw === undefined ? '—' : `${f(s.peakPowerKw, 1)} kW (${f(kwToHp(s.peakPowerKw), 0)} hp)` },
+    { label: 'Peak battery power', value: s.peakPowerKw === null || s.peakPowerKw === undefined ? '—' : `${formatFigure(s.peakPowerKw, 1)} kW (${formatFigure(kwToHp(s.peakPowerKw), 0)} hp)` },
     { label: 'Strongest lift-off slowing (0.5 s mean)', value: withUnit(s.peakLiftOffDecelMs2, 2, 'm/s²') },
     { label: 'Energy used', value: withUnit(s.energyOutWh, 0, 'Wh') },
     { label: 'Energy recovered by regen', value: withUnit(s.energyRegenWh, 0, 'Wh') },

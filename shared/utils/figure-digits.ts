@@ -5,9 +5,11 @@ import { localeNumber } from './number-format'
 // (common practice). A figure and a warning about it then never disagree in the last digit.
 export const unitDecimals: Record<string, number> = { 'A': 0, 'kg': 0, 'N': 0, 'km/h': 0, 'mm': 0, '°C': 0, 's': 1, '%': 1, 'h': 1, 'kW': 1, 'm/s²': 2, '×': 2, 'm': 3 }
 
-// The number alone, with the decimals its unit takes; a dash where there is none.
-export function figureNumber(x: number | null | undefined, unit: string): string {
+// A number with exactly `decimals` decimals; a dash where there is none.
+export function formatFigure(x: number | null | undefined, decimals = 1): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return '—'
-  const d = unitDecimals[unit] ?? 1
-  return localeNumber(x, { minimumFractionDigits: d, maximumFractionDigits: d })
+  return localeNumber(x, { minimumFractionDigits: decimals, maximumFractionDigits: decimals })
 }
+
+// The number alone, with the decimals its unit takes.
+export const figureNumber = (x: number | null | undefined, unit: string): string => formatFigure(x, unitDecimals[unit] ?? 1)

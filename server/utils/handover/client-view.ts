@@ -1,11 +1,12 @@
 import { Op } from 'sequelize'
-import { RoadTest, Snag, Workshop, type Vehicle } from '../../models'
+import { RoadTest, Workshop, type Vehicle } from '../../models'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
 import { describeSettings } from '../../../shared/utils/plain-words'
 import type { ClientCarView } from '../../../shared/schemas/client-view'
-import { mostPressingFirst, snagPriorityLabels, unresolvedSnagStatuses, type SnagPriority } from '../../../shared/schemas/snag'
+import { snagPriorityLabels, type SnagPriority } from '../../../shared/schemas/snag'
 import { openWorkAdvice } from '../../../shared/schemas/handover'
 import { onCarProfiles } from '../fleet/readbacks'
+import { openSnags } from './open-snags'
 import { defaultSettings, evaluate, workshopSettingsSchema } from '../../../shared/compute'
 
 // What a car's owner sees: the car, what its controller is set to in plain words, how the road test went and
@@ -22,9 +23,7 @@ export async function clientCarView(vehicle: Vehicle): Promise<ClientCarView> {
   const test = profiles.length
     ? await RoadTest.findOne({ where: { vehicleId: vehicle.id, versionId: { [Op.in]: profiles.map(p => p.versionId) } }, order: [['testedAt', 'DESC']] })
     : null
-  const open = await Snag.findAll({ where: { vehicleId: vehicle.id, status: { [Op.in]: unresolvedSnagStatuses } }, order: [['id', 'ASC']] })
-  const enhancements = open.filter(s => s.kind === 'enhancement')
-  const work = mostPressingFirst(open.filter(s => s.kind !== 'enhancement'))
+  const { enhancements, work } = await openSnags(vehicle.id)
   return {
     car: { id: vehicle.id, stockRef: vehicle.stockRef, make: vehicle.make, model: vehicle.model, year: vehicle.year, registration: vehicle.registration, status: vehicle.status, statusLabel: vehicleStatusLabels[vehicle.status as VehicleStatus] },
     onCar,

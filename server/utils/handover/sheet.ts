@@ -1,19 +1,21 @@
 import type { RecordedCheck } from '../../../shared/schemas/workshop-checks'
 // Gathers the handover sheet: the car, each profile's on-car version with its figures, warnings and
 // justifications, the road test that signed it off, the people and hashes, open enhancements, cautions.
-import { Profile, ProfileVersion, Review, RoadTest, Snag, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
+import { Profile, ProfileVersion, Review, RoadTest, TelemetryLog, User, Workshop, type Vehicle } from '../../models'
 import { driftNotice, handoverCautions, openWorkAdvice, type HandoverProfile, type HandoverSheet } from '../../../shared/schemas/handover'
 import { checkVerdictLabels, surfaceLabels, type CheckKey, type CheckVerdict } from '../../../shared/schemas/road-test'
 import { checkTitles } from '../../../shared/schemas/road-test-checks'
 import { measuredValues } from '../../../shared/utils/check-measures'
 import { formatDate } from '../../../shared/utils/dates'
-import { mostPressingFirst, snagKindLabels, snagPriorityLabels, unresolvedSnagStatuses, type SnagKind, type SnagPriority } from '../../../shared/schemas/snag'
+import { snagKindLabels, snagPriorityLabels, type SnagKind, type SnagPriority } from '../../../shared/schemas/snag'
 import { vehicleStatusLabels, type VehicleStatus } from '../../../shared/schemas/vehicle'
 import type { TelemetrySummary } from '../../../shared/telemetry/summary'
 import { carFactLines, figureLines, settingLines } from './words'
+import { openSnags } from './open-snags'
 import { loadWorkshopSettings, evaluateOnServer } from '../platforms/evaluation'
 import { recordedVersionActors } from '../history/recorded-names'
 import { localeNumber } from '../../../shared/utils/number-format'
+import { figureNumber } from '../../../shared/utils/figure-digits'
 
 // A mandatory check by its title; one of the workshop's own by the label and unit it was recorded with.
 function checkLine(c: RoadTest['checks'][number], list: RecordedCheck[]) {
@@ -32,7 +34,7 @@ function logLines(s: TelemetrySummary | undefined) {
     { label: 'Logged', value: `${localeNumber(s.samples)} samples over ${f(s.durationS / 60, 1)} min` },
     { label: 'Peak speed', value: `${f(s.peakSpeedKph, 0)} km/h` },
     { label: 'Peak battery power', value: `${f(s.peakPowerKw, 1)} kW` },
-    { label: 'Strongest lift-off slowing', value: `${s.peakLiftOffDecelMs2 === null ? '—' : localeNumber(s.peakLiftOffDecelMs2, { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²` },
+    { label: 'Strongest lift-off slowing', value: `${figureNumber(s.peakLiftOffDecelMs2, 'm/s²')} m/s²` },
     { label: 'Roll-back on the hill start', value: `${f(s.maxRollbackM * 1000, 0)} mm` },
     { label: 'Peak temperatures', value: `motor ${f(s.peakMotorC, 0)} °C, inverter ${f(s.peakInverterC, 0)} °C, battery ${f(s.peakBatteryC, 0)} °C` },
     { label: 'Energy', value: `${f(s.energyOutWh / 1000, 2)} kWh used, ${f(s.energyRegenWh / 1000, 2)} kWh recovered by regen` }
@@ -75,13 +77,11 @@ export async function handoverSheet(vehicle: Vehicle): Promise<HandoverSheet> {
   const onCar = profiles.filter(p => p.onCarVersionId)
   if (!onCar.length) throw createError({ statusCode: 409, message: 'No profile has been signed off for this car yet: the handover sheet follows sign-off.' })
   const versions = await ProfileVersion.findAll({ where: { id: onCar.map(p => p.onCarVersionId!) } })
-  const [workshop, open] = await Promise.all([
-    Workshop.findByPk(vehicle.workshopId, { attributes: ['name'] }),
-    Snag.findAll({ where: { vehicleId: vehicle.id, status: unresolvedSnagStatuses }, order: [['id', 'ASC']] })
-  ])
-  const enhancements = open.filter(s => s.kind === 'enhancement')
   // Faults and repairs, most pressing first: the owner is told what is still to do and whether to drive.
-  const work = mostPressingFirst(open.filter(s => s.kind !== 'enhancement'))
+  const [workshop, { enhancements, work }] = await Promise.all([
+    Workshop.findByPk(vehicle.workshopId, { attributes: ['name'] }),
+    openSnags(vehicle.id)
+  ])
   const owner = (vehicle as Vehicle & { owner?: User | null }).owner
   return {
     workshop: workshop?.name ?? '', generatedAt: new Date().toISOString(),

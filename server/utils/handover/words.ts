@@ -9,7 +9,7 @@ import { figureNumber } from '../../../shared/utils/figure-digits'
 
 const n = (x: number | null | undefined, digits = 0) => x === null || x === undefined || !Number.isFinite(x) ? '—' : localeNumber(x, { maximumFractionDigits: digits })
 // Decelerations keep two decimals, as the trade compares them (0.50 m/s², not 0.5).
-const ms2 = (x: number) => `${localeNumber(x, { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m/s²`
+const ms2 = (x: number) => `${figureNumber(x, 'm/s²')} m/s²`
 const kw = (x: number) => `${n(x, 1)} kW (${n(kwToHp(x))} hp)`
 const kph = (x: number | null) => x === null ? '—' : `${n(x)} km/h (${n(kphToMph(x))} mph)`
 
